@@ -2,7 +2,7 @@ import { useId, type ComponentProps, type ReactNode } from "react";
 import { cn } from "./cn";
 
 const control =
-  "block w-full rounded-md border border-line-strong bg-sunken px-3 text-sm text-ink placeholder:text-faint " +
+  "block w-full rounded-md border border-line-strong bg-field px-3 text-sm text-ink placeholder:text-faint " +
   "transition-colors hover:border-muted focus:border-accent focus:outline-none focus-visible:outline-2 focus-visible:outline-offset-1 focus-visible:outline-accent " +
   "disabled:cursor-not-allowed disabled:opacity-60 aria-[invalid=true]:border-bad";
 
