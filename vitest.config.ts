@@ -9,6 +9,7 @@ export default defineConfig({
   test: {
     include: ["tests/unit/**/*.test.{ts,tsx}"],
     environment: "node",
+    setupFiles: ["tests/support/setup.ts"],
     testTimeout: 60_000,
     hookTimeout: 60_000,
   },
