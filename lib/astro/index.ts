@@ -8,3 +8,5 @@ export * from "./constants";
 export * from "./time";
 export * from "./vec3";
 export * from "./kepler";
+export * from "./flyby";
+export * from "./bplane";
