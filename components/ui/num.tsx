@@ -8,16 +8,16 @@ export interface NumProps {
   digits?: number;
   /** Prefix positive values with "+" (for deltas). */
   signed?: boolean;
-  /** Group thousands with a thin space (default true for |value| ≥ 10 000). */
+  /** Group thousands with a thin space (default false, so copied numbers paste as numbers). */
   group?: boolean;
   className?: string;
   title?: string;
 }
 
-const MINUS = "\u2212";
+const MINUS = "-"; // ASCII, so copied values parse in spreadsheets and scripts
 const THIN = "\u2009";
 
-/** Format a number the way <Num> shows it: "—" for null/NaN, "∞" for Infinity, true minus sign. */
+/** Format a number the way <Num> shows it: "—" for null/NaN, "∞" for Infinity, "-0" shown as "0". */
 export function formatNum(
   value: number | null | undefined,
   digits = 2,
@@ -28,7 +28,7 @@ export function formatNum(
   if (value === -Infinity) return `${MINUS}∞`;
   const abs = Math.abs(value);
   let body = abs.toFixed(Math.max(0, Math.min(20, Math.trunc(digits))));
-  const group = opts.group ?? abs >= 10000;
+  const group = opts.group ?? false;
   if (group) {
     const [int = "", frac] = body.split(".");
     body = int.replace(/\B(?=(\d{3})+(?!\d))/g, THIN) + (frac !== undefined ? `.${frac}` : "");
