@@ -33,7 +33,8 @@ export function physicalOf(body: BodyId, spec: Pick<TourSpec, "bodies">): BodyPh
   return (BODIES as Record<string, BodyPhysical>)[body as PlanetId] ?? spec.bodies?.[body];
 }
 
-export function toTourSpec(tour: StoredTour, teamBodies: TeamBody[]): TourSpec {
+/** StoredTour → TourSpec (pure: the workbench worker uses it too). `teamBodies` gives small bodies' physical data. */
+export function toTourSpec(tour: StoredTour, teamBodies: Pick<TeamBody, "id" | "mu" | "radius" | "minFlybyAltitude">[]): TourSpec {
   const bodies: TourSpec["bodies"] = {};
   for (const b of teamBodies) bodies[b.id] = { mu: b.mu, radius: b.radius, minFlybyAltitude: b.minFlybyAltitude };
   return {

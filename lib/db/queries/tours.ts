@@ -14,6 +14,7 @@ import { audit } from "@/lib/db/audit";
 import { teamBodies } from "./bodies";
 import { evaluateStoredTour, unknownBodies, type TourSummary } from "@/lib/tours/evaluate";
 import {
+  PLANETS,
   defaultStoredTour,
   storedTourSchema,
   type StoredTour,
@@ -21,7 +22,7 @@ import {
   type patchTourSchema,
   type tourListQuerySchema,
 } from "@/lib/validation/tour";
-import type { TourResult } from "@/lib/astro/types";
+import type { CustomBodySpec, TourResult } from "@/lib/astro/types";
 
 export interface TourListItem extends TourSummary {
   id: number;
@@ -39,6 +40,10 @@ export interface TourDetail extends TourListItem {
   tour: StoredTour;
   result: TourResult | null;
   createdAt: string;
+  /** The team's small bodies, for the client-side ephemeris (EphemerisSpec.customBodies). */
+  customBodies: CustomBodySpec[];
+  /** Bodies a chain may use: the planets and the team's small bodies. */
+  bodyOptions: { id: string; name: string }[];
 }
 
 function summaryOf(t: Tour): TourSummary {
@@ -125,13 +130,24 @@ export async function getTourDetail(user: CurrentUser, id: number): Promise<Tour
 
 async function detailOf(t: Tour, teamId: number): Promise<TourDetail> {
   const tour = parseStored(t.specJson);
+  const bodies = await teamBodies(teamId);
   let result: TourResult | null = null;
   try {
-    result = evaluateStoredTour(tour, await teamBodies(teamId)).result;
+    result = evaluateStoredTour(tour, bodies).result;
   } catch (err) {
     console.error("[gybe] evaluation failed for tour", t.id, err);
   }
-  return { ...toItem(t), tour, result, createdAt: t.createdAt.toISOString() };
+  return {
+    ...toItem(t),
+    tour,
+    result,
+    createdAt: t.createdAt.toISOString(),
+    customBodies: bodies.map((b) => ({ id: b.id, elements: b.elements, epoch: b.epoch, mu: b.mu, radius: b.radius, minFlybyAltitude: b.minFlybyAltitude })),
+    bodyOptions: [
+      ...PLANETS.map((p) => ({ id: p, name: p.charAt(0).toUpperCase() + p.slice(1) })),
+      ...bodies.map((b) => ({ id: b.id as string, name: b.name })),
+    ],
+  };
 }
 
 async function evaluateForTeam(user: CurrentUser, tour: StoredTour) {
