@@ -119,9 +119,35 @@ function householder(T: number, x0: number, N: number, lam: number, eps: number)
   let x = x0;
   let it = 0;
   while (it < MAX_IT) {
-    const tof = x2tof(x, N, lam, l2);
     const umx2 = 1 - x * x;
     const y = Math.sqrt(1 - l2 * umx2);
+    const dist = x > 1 ? x - 1 : 1 - x;
+    let tof: number;
+    if (dist >= LAGRANGE) {
+      // Lancaster's expression inline (the common case), sharing y = √(1 + λ²E) with the derivatives.
+      const E = -umx2;
+      const rho = umx2 > 0 ? umx2 : E;
+      const sr = Math.sqrt(rho);
+      const g = x * y - lam * E;
+      const d = E < 0 ? N * PI + Math.acos(g) : Math.log(sr * (y - lam * x) + g);
+      tof = (x - lam * y - d / sr) / E;
+    } else {
+      tof = x2tof(x, N, lam, l2);
+    }
+    if (umx2 < 1e-6 && umx2 > -1e-6 && x > 0) {
+      // Within ~5e-7 of the parabola x = 1 the closed-form derivatives are 0/0: take a Newton
+      // step with a central difference of Battin's series instead (rare; accurate to ~1e-8).
+      const delta0 = tof - T;
+      if (delta0 === 0) {
+        it++;
+        break;
+      }
+      const dT0 = (x2tof(x + 1e-4, N, lam, l2) - x2tof(x - 1e-4, N, lam, l2)) * 5e3;
+      x -= delta0 / dT0;
+      it++;
+      if (!((delta0 > 0 ? delta0 : -delta0) > epsT)) break;
+      continue;
+    }
     const iy = 1 / y;
     const iy3 = iy * iy * iy;
     const inv = 1 / umx2;

@@ -278,6 +278,35 @@ describe("lambert: geometry edge cases", () => {
     }
   });
 
+  it("recovers a parabolic arc (Izzo's x = 1, where the closed-form derivatives are 0/0)", () => {
+    const mu = MU_EARTH;
+    const r1: V = [7000, 0, 0];
+    const vEsc = Math.sqrt((2 * mu) / 7000); // parabola: v = √(2μ/r) (any textbook)
+    const v1: V = [0, 0.6 * vEsc, 0.8 * vEsc];
+    for (const dt of [600, 3600, 86400]) {
+      const r2 = propagate(r1, v1, dt, mu).r;
+      const sols = lambert(r1, r2, dt, mu);
+      expect(sols).toHaveLength(1);
+      expectVec(sols[0]!.v1, v1, 1e-9 * vEsc);
+      expect(sols[0]!.iterations).toBeLessThanOrEqual(15);
+    }
+  });
+
+  it("finds every revolution count up to a large maxRevs (LEO, 10 days)", () => {
+    const r1: V = [7000, 100, 0];
+    const r2: V = [-7100, 3000, 500];
+    const tof = 10 * DAY;
+    for (const prograde of [true, false]) {
+      const sols = lambert(r1, r2, tof, MU_EARTH, { prograde, maxRevs: 200 });
+      // ~139 periods of a 7000 km orbit fit in 10 days; each N up to the largest feasible has two roots
+      const nTop = sols[sols.length - 1]!.revs;
+      expect(nTop).toBeGreaterThan(100);
+      expect(nTop).toBeLessThan(200);
+      expect(sols).toHaveLength(2 * nTop + 1);
+      for (const s of sols) expect(miss(r1, s.v1, tof, MU_EARTH, r2).project).toBeLessThan(1e-9);
+    }
+  });
+
   it("prograde means h_z > 0, not the short way: a 270° prograde arc", () => {
     const r2 = rotZ(r1, -Math.PI / 2); // 90° clockwise from r1: prograde must sweep 270°
     const tof = 300 * DAY;
