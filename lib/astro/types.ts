@@ -240,3 +240,22 @@ export interface PorkchopResult {
   /** Departure v∞ + arrival Δv for the arrival kind, km/s. */
   dv: Float64Array;
 }
+
+// ---- sampled trajectory (lib/astro/sample.ts) ----
+
+/**
+ * A tour's heliocentric arcs sampled for display; built by `sampleTour` (lib/astro/sample.ts).
+ * Leg i occupies samples legStarts[i] … legStarts[i+1] − 1 (the last leg runs to the end).
+ */
+export interface TourSamples {
+  /** Sample epochs, TDB s past J2000, non-decreasing (a leg boundary epoch appears twice). */
+  epochs: Float64Array;
+  /** Positions, km, heliocentric ecliptic J2000, xyz interleaved (length 3·epochs.length). */
+  positions: Float64Array;
+  /** Index into `epochs` of each leg's first sample. */
+  legStarts: number[];
+  /** Velocities, km/s, heliocentric ecliptic J2000, xyz interleaved (for Hermite interpolation). */
+  velocities?: Float64Array;
+  /** Per leg: false when the leg had no Lambert solution (its samples are not a trajectory). */
+  legOk?: boolean[];
+}
