@@ -50,7 +50,7 @@ export function AppNav({ user }: AppNavProps) {
           <span className="hidden text-base font-semibold tracking-tight text-ink sm:inline">Gybe</span>
         </Link>
         <span aria-hidden className="hidden h-5 w-px bg-line sm:block" />
-        <nav aria-label="Main" className="-mx-1 flex min-w-0 flex-1 items-center gap-0.5 overflow-x-auto">
+        <nav aria-label="Main" className="flex h-full min-w-0 flex-1 items-stretch gap-0.5 overflow-x-auto">
           {items.map((item) => {
             const active = isActive(pathname, item.href);
             return (
@@ -59,13 +59,20 @@ export function AppNav({ user }: AppNavProps) {
                 href={item.href}
                 aria-current={active ? "page" : undefined}
                 className={cn(
-                  "relative rounded-md px-3 py-1.5 text-sm whitespace-nowrap transition-colors",
-                  active ? "bg-raised font-medium text-ink" : "text-muted hover:bg-raised/60 hover:text-ink",
+                  "group relative flex items-center px-1 text-sm whitespace-nowrap",
+                  active ? "font-medium text-ink" : "text-muted hover:text-ink",
                 )}
               >
-                {item.label}
+                <span
+                  className={cn(
+                    "rounded-md px-2.5 py-1.5 transition-colors",
+                    active ? "bg-raised" : "group-hover:bg-raised/60",
+                  )}
+                >
+                  {item.label}
+                </span>
                 {active ? (
-                  <span aria-hidden className="absolute inset-x-3 -bottom-[9px] h-0.5 rounded-full bg-accent" />
+                  <span aria-hidden className="absolute inset-x-2 bottom-0 h-0.5 rounded-full bg-accent" />
                 ) : null}
               </Link>
             );
