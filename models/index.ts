@@ -33,5 +33,6 @@ export function initModels(sequelize: Sequelize): void {
   Invitation.belongsTo(Team, { foreignKey: "teamId" });
   CustomBody.belongsTo(Team, { foreignKey: "teamId" });
   MailMessage.belongsTo(Team, { foreignKey: "teamId" });
+  AuditEvent.belongsTo(Team, { foreignKey: "teamId" });
   AuditEvent.belongsTo(User, { foreignKey: "actorId", as: "actor", constraints: false });
 }

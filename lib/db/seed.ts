@@ -3,7 +3,8 @@
  * probes and small bodies; no real mission's data. No `server-only`: scripts import this.
  */
 import { sequelize } from "./sequelize";
-import { CustomBody, MailMessage, Team, Tour, TourRevision, User, AuditEvent, Comment } from "@/models";
+import { sendMail } from "@/lib/mail/mailer";
+import { CustomBody, Team, Tour, TourRevision, User, AuditEvent, Comment } from "@/models";
 import type { Role } from "@/lib/auth/roles";
 import { hashPassword } from "@/lib/auth/password";
 import { isoToTdbSeconds } from "@/lib/astro/time";
@@ -135,7 +136,7 @@ export interface SeedTeamOptions {
 
 /** Seed one team with its users, bodies and tours. Returns the team id and user ids by role. */
 export async function seedTeam(opts: SeedTeamOptions): Promise<{ teamId: number; userIds: Record<string, number> }> {
-  return sequelize.transaction(async (transaction) => {
+  const result = await sequelize.transaction(async (transaction) => {
     const team = await Team.create({ name: opts.teamName }, { transaction });
     const userIds: Record<string, number> = {};
     for (const u of opts.users) {
@@ -195,21 +196,19 @@ export async function seedTeam(opts: SeedTeamOptions): Promise<{ teamId: number;
         await Comment.create({ tourId: tour.id, authorId: lead, body: "Returned: the Mars flyby date needs a second look against the launch-period plan.", nodeId: null }, { transaction });
       }
     }
-    if (opts.mail) {
-      const lead = opts.users.find((u) => u.role === "lead");
-      await MailMessage.create(
-        {
-          teamId: team.id,
-          to: opts.users.map((u) => u.email).join(", "),
-          subject: `Welcome to Gybe, ${opts.teamName}`,
-          text: `Hello team,\n\nOur workspace is ready. Tours live under Tours; the Workbench replays them.\nRemember: results are preliminary patched-conic design.\n\n— ${lead?.name ?? "Gybe"}`,
-          html: null,
-        },
-        { transaction },
-      );
-    }
     return { teamId: team.id, userIds };
   });
+  if (opts.mail) {
+    // Sent through the mailer (locally: stored for Outbox), like every other message.
+    const lead = opts.users.find((u) => u.role === "lead");
+    await sendMail({
+      teamId: result.teamId,
+      to: opts.users.map((u) => u.email),
+      subject: `Welcome to Gybe, ${opts.teamName}`,
+      text: `Hello team,\n\nOur workspace is ready. Tours live under Tours; the Workbench replays them.\nRemember: results are preliminary patched-conic design, to be verified with high-fidelity navigation software and our flight-dynamics authority.\n\n— ${lead?.name ?? "Gybe"}`,
+    });
+  }
+  return result;
 }
 
 /** Seed the demo team when the database has no team yet. Returns false when it was not empty. */

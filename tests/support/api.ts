@@ -23,7 +23,7 @@ export async function call(res: Promise<Response> | Response): Promise<{ status:
 export async function as(email: string, password: string): Promise<void> {
   useJar(email);
   const session = await import("@/app/api/session/route");
-  const r = await call(session.POST(req("POST", "/api/session", { email, password })));
+  const r = await call(session.POST(req("POST", "/api/session", { email, password }), {}));
   if (r.status !== 200) throw new Error(`sign-in as ${email} failed: ${r.status} ${JSON.stringify(r.body)}`);
 }
 

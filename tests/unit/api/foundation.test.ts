@@ -41,7 +41,7 @@ describe("health", () => {
 describe("session", () => {
   it("rejects a body that is not JSON with 400 invalid_json", async () => {
     anonymous();
-    const r = await call(sessionRoute.POST(req("POST", "/api/session", undefined, "{not json")));
+    const r = await call(sessionRoute.POST(req("POST", "/api/session", undefined, "{not json"), {}));
     expect(r.status).toBe(400);
     expect(r.body.error).toBe("invalid_json");
     expect(r.body.message).toMatch(/JSON/);
@@ -49,7 +49,7 @@ describe("session", () => {
 
   it("reports each bad field with 400", async () => {
     anonymous();
-    const r = await call(sessionRoute.POST(req("POST", "/api/session", { email: "nope", password: "" })));
+    const r = await call(sessionRoute.POST(req("POST", "/api/session", { email: "nope", password: "" }), {}));
     expect(r.status).toBe(400);
     const paths = r.body.issues.map((i: { path: string }) => i.path);
     expect(paths).toContain("email");
@@ -58,8 +58,8 @@ describe("session", () => {
 
   it("answers 401 with a message that does not say whether the address exists", async () => {
     anonymous();
-    const known = await call(sessionRoute.POST(req("POST", "/api/session", { email: "viewer@alder.example", password: "wrong-password" })));
-    const unknown = await call(sessionRoute.POST(req("POST", "/api/session", { email: "nobody@alder.example", password: "wrong-password" })));
+    const known = await call(sessionRoute.POST(req("POST", "/api/session", { email: "viewer@alder.example", password: "wrong-password" }), {}));
+    const unknown = await call(sessionRoute.POST(req("POST", "/api/session", { email: "nobody@alder.example", password: "wrong-password" }), {}));
     expect(known.status).toBe(401);
     expect(unknown.status).toBe(401);
     expect(known.body.message).toBe(unknown.body.message);
@@ -69,10 +69,10 @@ describe("session", () => {
     anonymous();
     for (const email of ["lockout@alder.example", "ghost@nowhere.example"]) {
       for (let i = 0; i < 5; i++) {
-        const r = await call(sessionRoute.POST(req("POST", "/api/session", { email, password: `bad-${i}` })));
+        const r = await call(sessionRoute.POST(req("POST", "/api/session", { email, password: `bad-${i}` }), {}));
         expect(r.status).toBe(401);
       }
-      const sixth = await call(sessionRoute.POST(req("POST", "/api/session", { email, password: email.startsWith("lockout") ? PW : "x" })));
+      const sixth = await call(sessionRoute.POST(req("POST", "/api/session", { email, password: email.startsWith("lockout") ? PW : "x" }), {}));
       expect(sixth.status).toBe(429);
       expect(sixth.body.error).toBe("locked");
       expect(sixth.body.message).toMatch(/15 minutes/);
@@ -83,7 +83,7 @@ describe("session", () => {
 
   it("a success resets the failure count", async () => {
     anonymous();
-    for (let i = 0; i < 4; i++) await call(sessionRoute.POST(req("POST", "/api/session", { email: "analyst@alder.example", password: "bad" })));
+    for (let i = 0; i < 4; i++) await call(sessionRoute.POST(req("POST", "/api/session", { email: "analyst@alder.example", password: "bad" }), {}));
     await as("analyst@alder.example", PW);
     const row = await SignInThrottle.findOne({ where: { email: "analyst@alder.example" } });
     expect(row?.failures).toBe(0);
