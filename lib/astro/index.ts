@@ -10,3 +10,4 @@ export * from "./vec3";
 export * from "./kepler";
 export * from "./flyby";
 export * from "./bplane";
+export * from "./tour";
