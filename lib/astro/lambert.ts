@@ -10,7 +10,8 @@
  * revolutions the minimum time of flight is found with Halley iterations on dT/dx = 0.
  *
  * Units: km, s, km/s, km³/s². Frame: whatever inertial frame r1 and r2 are given in; the
- * velocities come back in the same frame. Epochs are not involved (only the time of flight).
+ * velocities come back in the same frame. Time scale: tof is a duration in seconds of any
+ * uniform scale (TDB for Gybe's legs); no epoch enters.
  *
  * `prograde` means the transfer's angular momentum has h_z > 0 in the frame of the inputs
  * (for a heliocentric ecliptic leg: counter-clockwise seen from ecliptic north), not "the
@@ -32,6 +33,8 @@ const LAGRANGE = 0.2;
 const EPS_SINGLE = 1e-5;
 /** Householder step tolerance on x, multi-revolution. */
 const EPS_MULTI = 1e-8;
+/** Largest revolution count lambert() will list (2·N + 1 solution objects). */
+const MAX_LIST_REVS = 100_000;
 /** Householder iteration cap. */
 const MAX_IT = 15;
 
@@ -391,7 +394,7 @@ function solveCore(
  * @param out Float64Array of length ≥ 6·(2·maxRevs + 1).
  * @param r1 departure position, km, any inertial frame (tuple or Float64Array), |r1| > 0.
  * @param r2 arrival position, km, same frame, |r2| > 0, not collinear with r1.
- * @param tof time of flight, s, finite, > 0.
+ * @param tof time of flight, s (a duration; TDB for Gybe's legs), finite, > 0.
  * @param mu gravitational parameter of the central body, km³/s², finite, > 0.
  * @param prograde true: transfer angular momentum h_z > 0 in the frame of the inputs.
  * @param maxRevs largest number of complete revolutions to look for, integer ≥ 0.
@@ -421,10 +424,11 @@ export function lambertInto(
  *
  * @param r1 departure position, km, any inertial frame (tuple or Float64Array), |r1| > 0.
  * @param r2 arrival position, km, same frame, |r2| > 0, not collinear with r1.
- * @param tof time of flight, s, finite, > 0.
+ * @param tof time of flight, s (a duration; TDB for Gybe's legs), finite, > 0.
  * @param mu gravitational parameter, km³/s², finite, > 0.
  * @param options.prograde (default true) transfer angular momentum h_z > 0 in the inputs' frame.
- * @param options.maxRevs (default 0) largest number of complete revolutions, integer ≥ 0.
+ * @param options.maxRevs (default 0) largest number of complete revolutions, integer ≥ 0
+ *   (at most 100,000 feasible revolutions are listed; lambertInto has no such limit).
  * @throws RangeError on bad inputs or exactly collinear r1, r2.
  * Source: D. Izzo, Celest. Mech. Dyn. Astr. 121 (2015), "Revisiting Lambert's problem".
  */
@@ -441,17 +445,20 @@ export function lambert(
     throw new RangeError("lambert: options.prograde must be a boolean");
   }
   // Room for the solutions that can exist: N ≤ min(maxRevs, floor(T/π)) with T the
-  // non-dimensional tof; computed after the core's own validation would be circular, so
-  // bound it generously here (inputs are validated by the core).
+  // non-dimensional tof (one spare). Bad inputs give cap 0 here and the core throws.
   let cap = 0;
-  if (typeof maxRevs === "number" && maxRevs > 0) {
+  if (typeof maxRevs === "number" && maxRevs > 0 && Number.isInteger(maxRevs)) {
     const a = comp(r1, 0), b = comp(r1, 1), cc = comp(r1, 2);
     const d = comp(r2, 0), e = comp(r2, 1), f = comp(r2, 2);
     const s = 0.5 * (Math.hypot(a, b, cc) + Math.hypot(d, e, f) + Math.hypot(d - a, e - b, f - cc));
-    const T = Math.sqrt((2 * mu) / (s * s * s)) * tof;
-    const bound = Math.floor(T / PI) + 1;
-    cap = bound >= 0 && bound < maxRevs ? bound : maxRevs;
-    if (!(cap >= 0 && cap < 1e7)) cap = 0; // invalid input: the core throws with a clear message
+    const bound = Math.floor((Math.sqrt((2 * mu) / (s * s * s)) * tof) / PI) + 1;
+    cap = bound < maxRevs ? bound : maxRevs;
+    if (!(cap >= 0)) cap = 0;
+    if (cap > MAX_LIST_REVS) {
+      throw new RangeError(
+        `lambert: maxRevs = ${maxRevs} with this tof allows ${cap} revolutions; lambert() lists at most ${MAX_LIST_REVS} (use lambertInto with your own buffer)`,
+      );
+    }
   }
   const out = new Float64Array(6 * (2 * cap + 1));
   const n = solveCore(out, r1, r2, tof, mu, prograde, maxRevs, false);
