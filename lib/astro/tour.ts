@@ -43,14 +43,24 @@ let lamBuf = new Float64Array(6 * 3);
 let legBuf = new Float64Array(6 * 8); // per leg v1, v2
 let legOk = new Uint8Array(8);
 const bpScratch = new Float64Array(2);
+const r1Scratch = new Float64Array(3);
+const r2Scratch = new Float64Array(3);
 
 function titleOf(body: BodyId): string {
   if (body.startsWith("custom:")) return body.slice(7);
   return body.charAt(0).toUpperCase() + body.slice(1);
 }
 
+/** km with thousands separators (no Intl: this runs inside searches). */
 function fmtKm(x: number): string {
-  return Math.abs(x) >= 100 ? Math.round(x).toLocaleString("en-US") : x.toFixed(1);
+  if (!(Math.abs(x) >= 100)) return x.toFixed(1);
+  const s = String(Math.round(Math.abs(x)));
+  let out = "";
+  for (let i = 0; i < s.length; i++) {
+    if (i > 0 && (s.length - i) % 3 === 0) out += ",";
+    out += s[i];
+  }
+  return (x < 0 ? "-" : "") + out;
 }
 
 /**
@@ -213,8 +223,14 @@ export function evaluateTour(spec: TourSpec, ephemeris: Ephemeris, caps?: TourCa
         message: `${titleOf(b.body)} (node ${k + 1}) is not after ${titleOf(a.body)} (node ${k}): epochs must increase along the chain.`,
       });
     } else {
-      const r1 = stateBuf.subarray(6 * k, 6 * k + 3);
-      const r2 = stateBuf.subarray(6 * k + 6, 6 * k + 9);
+      const r1 = r1Scratch;
+      const r2 = r2Scratch;
+      r1[0] = stateBuf[6 * k]!;
+      r1[1] = stateBuf[6 * k + 1]!;
+      r1[2] = stateBuf[6 * k + 2]!;
+      r2[0] = stateBuf[6 * k + 6]!;
+      r2[1] = stateBuf[6 * k + 7]!;
+      r2[2] = stateBuf[6 * k + 8]!;
       try {
         const need = 6 * (2 * revs + 1);
         if (lamBuf.length < need) lamBuf = new Float64Array(need);
