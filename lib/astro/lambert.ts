@@ -40,33 +40,36 @@ const MAX_IT = 15;
 
 /** Iterations of the last Householder solve (module scratch: no allocation). */
 let hhIters = 0;
+/**
+ * Numeric "registers". Doubles cross function boundaries through this typed array, never as
+ * arguments or return values, so a call that V8 does not inline cannot box a double into a
+ * heap object: the hot path stays allocation-free.
+ * [R_T] target T, [R_X] Householder x (in: initial guess, out: root), [R_LAM] λ, [R_EPS]
+ * tolerance, [R_TX] x for x2tof, [R_TOF] x2tof result.
+ */
+const R = new Float64Array(8);
+const R_T = 0;
+const R_X = 1;
+const R_LAM = 2;
+const R_EPS = 3;
+const R_TX = 4;
+const R_TOF = 5;
 /** Per-solution Householder iteration counts of the last core solve, in output order. */
 let itersScratch = new Int32Array(16);
 /** Per-solution slot of the last core solve (0 single, 2N−1 left, 2N right), in output order. */
 let slotScratch = new Int32Array(16);
 
 /**
- * Battin's hypergeometric function 2F1(3, 1; 5/2; z) by its series, to tolerance `tol`
- * on the last term. Used only for |x − 1| < 0.01 where z is small. Source: Izzo 2015, eq. 20.
+ * Non-dimensional time of flight T(x) for N complete revolutions, x = R[R_TX], λ = R[R_LAM];
+ * result to R[R_TOF]. Battin's hypergeometric series 2F1(3, 1; 5/2; S1) near x = 1
+ * (|x − 1| < 0.01, terms to 1e-11), Lagrange's expression for 0.01 ≤ |x − 1| < 0.2,
+ * Lancaster's elsewhere. Source: Izzo 2015, §2 (eqs. 9, 18, 20) and the band thresholds of
+ * its reference implementation.
  */
-function hypergeometricF(z: number, tol: number): number {
-  let sj = 1;
-  let cj = 1;
-  let j = 0;
-  for (;;) {
-    cj = (cj * (3 + j) * (1 + j)) / (2.5 + j) * z / (j + 1);
-    sj += cj;
-    j++;
-    if (!(Math.abs(cj) > tol) || j > 200) return sj;
-  }
-}
-
-/**
- * Non-dimensional time of flight T(x) for N complete revolutions and Izzo's λ.
- * Battin's series near x = 1, Lagrange's expression in the mid band, Lancaster's elsewhere.
- * Source: Izzo 2015, §2 (eqs. 9, 18, 20) and its reference implementation's band thresholds.
- */
-function x2tof(x: number, N: number, lam: number, l2: number): number {
+function x2tof(N: number): void {
+  const x = R[R_TX] as number;
+  const lam = R[R_LAM] as number;
+  const l2 = lam * lam;
   const dist = x > 1 ? x - 1 : 1 - x;
   if (dist < LAGRANGE && dist >= BATTIN) {
     // Lagrange
@@ -75,51 +78,57 @@ function x2tof(x: number, N: number, lam: number, l2: number): number {
       const alfa = 2 * Math.acos(x);
       let beta = 2 * Math.asin(Math.sqrt(l2 / a));
       if (lam < 0) beta = -beta;
-      return (a * Math.sqrt(a) * (alfa - Math.sin(alfa) - (beta - Math.sin(beta)) + 2 * PI * N)) * 0.5;
+      R[R_TOF] = a * Math.sqrt(a) * (alfa - Math.sin(alfa) - (beta - Math.sin(beta)) + 2 * PI * N) * 0.5;
+      return;
     }
     const alfa = 2 * Math.acosh(x);
     let beta = 2 * Math.asinh(Math.sqrt(-l2 / a));
     if (lam < 0) beta = -beta;
-    return (-a * Math.sqrt(-a) * (beta - Math.sinh(beta) - (alfa - Math.sinh(alfa)))) * 0.5;
+    R[R_TOF] = -a * Math.sqrt(-a) * (beta - Math.sinh(beta) - (alfa - Math.sinh(alfa))) * 0.5;
+    return;
   }
   const E = x * x - 1;
   const z = Math.sqrt(1 + l2 * E);
+  const rho = E < 0 ? -E : E;
   if (dist < BATTIN) {
     const eta = z - lam * x;
     const s1 = 0.5 * (1 - lam - x * eta);
-    const q = (4 / 3) * hypergeometricF(s1, 1e-11);
-    let t = 0.5 * (eta * eta * eta * q + 4 * lam * eta);
-    if (N > 0) {
-      const rho = E < 0 ? -E : E;
-      t += (N * PI) / (rho * Math.sqrt(rho));
+    // Battin's hypergeometric function 2F1(3, 1; 5/2; s1) by its series (Izzo 2015, eq. 20).
+    let sj = 1;
+    let cj = 1;
+    for (let j = 0; j < 200; j++) {
+      cj = ((cj * (3 + j) * (1 + j)) / (2.5 + j)) * (s1 / (j + 1));
+      sj += cj;
+      if (!((cj > 0 ? cj : -cj) > 1e-11)) break;
     }
-    return t;
+    let t = 0.5 * (eta * eta * eta * (4 / 3) * sj + 4 * lam * eta);
+    if (N > 0) t += (N * PI) / (rho * Math.sqrt(rho));
+    R[R_TOF] = t;
+    return;
   }
   // Lancaster
-  const rho = E < 0 ? -E : E;
   const y = Math.sqrt(rho);
   const g = x * z - lam * E;
-  let d: number;
-  if (E < 0) {
-    d = N * PI + Math.acos(g);
-  } else {
-    d = Math.log(y * (z - lam * x) + g);
-  }
-  return (x - lam * z - d / y) / E;
+  const d = E < 0 ? N * PI + Math.acos(g) : Math.log(y * (z - lam * x) + g);
+  R[R_TOF] = (x - lam * z - d / y) / E;
 }
 
 /**
- * Householder (3rd-order) iterations on T(x) = T. Returns x; the iteration count goes to `hhIters`.
+ * Householder (3rd-order) iterations on T(x) = T for N revolutions, from R[R_X] with T = R[R_T],
+ * λ = R[R_LAM], tolerance R[R_EPS] (stop once the residual before a step is below eps·T). The
+ * root goes to R[R_X], the iteration count to `hhIters`.
  * Source: Izzo 2015, §3 (eq. 22 derivatives, Householder update).
  */
-function householder(T: number, x0: number, N: number, lam: number, eps: number): number {
-  const epsT = eps * T;
+function householder(N: number): void {
+  const T = R[R_T] as number;
+  const lam = R[R_LAM] as number;
+  const epsT = (R[R_EPS] as number) * T;
+  let x = R[R_X] as number;
   const l2 = lam * lam;
   const l3 = l2 * lam;
   const a2 = 2 * l3;
   const b2 = 2 * (1 - l2) * l3;
   const c6 = 6 * (1 - l2) * l2 * l3;
-  let x = x0;
   let it = 0;
   while (it < MAX_IT) {
     const umx2 = 1 - x * x;
@@ -135,7 +144,9 @@ function householder(T: number, x0: number, N: number, lam: number, eps: number)
       const d = E < 0 ? N * PI + Math.acos(g) : Math.log(sr * (y - lam * x) + g);
       tof = (x - lam * y - d / sr) / E;
     } else {
-      tof = x2tof(x, N, lam, l2);
+      R[R_TX] = x;
+      x2tof(N);
+      tof = R[R_TOF] as number;
     }
     if (umx2 < 1e-6 && umx2 > -1e-6 && x > 0) {
       // Within ~5e-7 of the parabola x = 1 the closed-form derivatives are 0/0: take a Newton
@@ -145,7 +156,12 @@ function householder(T: number, x0: number, N: number, lam: number, eps: number)
         it++;
         break;
       }
-      const dT0 = (x2tof(x + 1e-4, N, lam, l2) - x2tof(x - 1e-4, N, lam, l2)) * 5e3;
+      R[R_TX] = x + 1e-4;
+      x2tof(N);
+      const tPlus = R[R_TOF] as number;
+      R[R_TX] = x - 1e-4;
+      x2tof(N);
+      const dT0 = (tPlus - (R[R_TOF] as number)) * 5e3;
       x -= delta0 / dT0;
       it++;
       if (!((delta0 > 0 ? delta0 : -delta0) > epsT)) break;
@@ -165,7 +181,7 @@ function householder(T: number, x0: number, N: number, lam: number, eps: number)
     if (!((delta > 0 ? delta : -delta) > epsT)) break;
   }
   hhIters = it;
-  return x;
+  R[R_X] = x;
 }
 
 /** Reads component k of a vector argument (tuple or Float64Array) as a number (undefined → NaN). */
@@ -276,6 +292,8 @@ function solveCore(
 
   const l3 = l2 * lam;
   const T = Math.sqrt((2 * mu) / (s * s * s)) * tof;
+  R[R_T] = T;
+  R[R_LAM] = lam;
 
   // Number of revolutions that can exist (Izzo 2015, §3).
   let nMax = Math.floor(T / PI);
@@ -301,7 +319,9 @@ function solveCore(
         if (dT !== 0) xNew = xOld - (dT * ddT) / (ddT * ddT - 0.5 * dT * dddT);
         const err = xOld > xNew ? xOld - xNew : xNew - xOld;
         if (err < 1e-13) break;
-        tMin = x2tof(xNew, nMax, lam, l2);
+        R[R_TX] = xNew;
+        x2tof(nMax);
+        tMin = R[R_TOF] as number;
         xOld = xNew;
       }
       if (tMin > T) nMax -= 1;
@@ -331,7 +351,9 @@ function solveCore(
       if (T >= t00) x0 = (t00 - T) / (T - t00 + 4);
       else if (T <= t1) x0 = (t1 * (t1 - T)) / (0.4 * (1 - l2 * l3) * T) + 1;
       else x0 = Math.exp((LN2 * Math.log(T / t00)) / Math.log(t1 / t00)) - 1;
-      x = householder(T, x0, 0, lam, EPS_SINGLE);
+      R[R_X] = x0;
+      R[R_EPS] = EPS_SINGLE;
+      householder(0);
     } else {
       const N = (k + 1) >> 1;
       let q: number;
@@ -344,8 +366,11 @@ function solveCore(
         const b = (8 * T) / (N * PI);
         q = Math.cbrt(b * b);
       }
-      x = householder(T, (q - 1) / (q + 1), N, lam, EPS_MULTI);
+      R[R_X] = (q - 1) / (q + 1);
+      R[R_EPS] = EPS_MULTI;
+      householder(N);
     }
+    x = R[R_X] as number;
     if (!(x - x === 0)) continue; // numerical failure: no solution on this branch
     const y = Math.sqrt(omL2 + l2 * x * x);
     const ly = lam * y;
