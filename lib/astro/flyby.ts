@@ -43,11 +43,17 @@ export function rpForTurn(vinf: number, delta: number, mu: number): number {
  * through the angle delta: the root of asin(1/e_in) + asin(1/e_out) = delta with
  * e = 1 + rp·v²/μ. Scalar and allocation-free (for searches). Safeguarded Newton (the left
  * side decreases monotonically from π at rp = 0 to 0 as rp → ∞, so the root is bracketed).
- * Returns 0 for delta ≥ π and Infinity for delta ≤ 0. Inputs are NOT validated here (hot path):
- * vin, vout km/s > 0, delta rad, mu km³/s² > 0. Relative accuracy ~1e-12.
+ * Returns 0 for delta ≥ π and Infinity for delta ≤ 0. Inputs: vin, vout km/s > 0, delta rad
+ * (finite), mu km³/s² > 0 (checked with a few comparisons only: RangeError otherwise).
+ * Relative accuracy ~1e-12.
  * Source: GTOP powered-flyby model (Vinkó & Izzo, 2008); Curtis ch. 8 for δ(e).
  */
 export function poweredFlybyRp(vin: number, vout: number, delta: number, mu: number): number {
+  if (!(vin > 0 && vin < Infinity && vout > 0 && vout < Infinity && mu > 0 && mu < Infinity) || Number.isNaN(delta)) {
+    throw new RangeError(
+      `poweredFlybyRp: vin (${vin}) and vout (${vout}) km/s and mu (${mu}) must be finite and positive, delta (${delta}) a number`,
+    );
+  }
   if (!(delta > 0)) return Infinity;
   if (delta >= Math.PI) return 0;
   const ai = (vin * vin) / mu;

@@ -20,6 +20,14 @@ const TWO_PI = 2 * Math.PI;
  * Source: Curtis §3.7, eqs. 3.50–3.51 (Stumpff functions).
  */
 export function stumpff(z: number, out: Float64Array | number[] = new Float64Array(2)): Float64Array | number[] {
+  if (typeof z !== "number" || Number.isNaN(z) || z === Infinity || z === -Infinity) {
+    throw new RangeError(`stumpff: z must be a finite number (got ${String(z)})`);
+  }
+  return stumpffInto(z, out);
+}
+
+/** Unchecked Stumpff evaluation used inside the solver (non-finite z gives non-finite values). */
+function stumpffInto(z: number, out: Float64Array | number[]): Float64Array | number[] {
   if (Math.abs(z) < 0.1) {
     // Series: C = Σ (−z)^k/(2k+2)!, S = Σ (−z)^k/(2k+3)!; 9 terms give full double precision here.
     let c = 0;
@@ -96,7 +104,7 @@ export function propagate(r0: Vec3Like, v0: Vec3Like, dt: number, mu: number): S
   // F(χ) = A χ² C + B χ³ S + r0 χ − √μ t; F'(χ) = A χ (1 − z S) + B χ² C + r0 = r(χ).
   const F = (x: number): number => {
     const z = alpha * x * x;
-    stumpff(z, cs);
+    stumpffInto(z, cs);
     const val = A * x * x * cs[0]! + B * x * x * x * cs[1]! + rn * x - target;
     return Number.isNaN(val) ? (x > 0 ? Infinity : -Infinity) : val;
   };
@@ -144,7 +152,7 @@ export function propagate(r0: Vec3Like, v0: Vec3Like, dt: number, mu: number): S
   let S = 0;
   for (let it = 0; it < 200; it++) {
     const z = alpha * x * x;
-    stumpff(z, cs);
+    stumpffInto(z, cs);
     C = cs[0]!;
     S = cs[1]!;
     let f = A * x * x * C + B * x * x * x * S + rn * x - target;
@@ -159,7 +167,7 @@ export function propagate(r0: Vec3Like, v0: Vec3Like, dt: number, mu: number): S
     x = xn;
     if (step <= 1e-15 * Math.abs(x) + 1e-300 || hi - lo <= 4e-16 * Math.abs(x)) {
       const z2 = alpha * x * x;
-      stumpff(z2, cs);
+      stumpffInto(z2, cs);
       C = cs[0]!;
       S = cs[1]!;
       break;
@@ -242,11 +250,11 @@ function propagateHyperbolic(
   return out;
 }
 
-/** Eccentricity below which an orbit is treated as circular (argp = 0). */
+/** Eccentricity below which an orbit is treated as circular (argp = 0); dimensionless. Common practice. */
 export const CIRCULAR_TOL = 1e-11;
-/** sin(i) below which an orbit is treated as equatorial (raan = 0). */
+/** |h_xy|/|h| = sin(i) below which an orbit is treated as equatorial (raan = 0). Common practice. */
 export const EQUATORIAL_TOL = 1e-11;
-/** |e − 1| below which an orbit is treated as parabolic. */
+/** |e − 1| below which an orbit is treated as parabolic (e set to 1). Common practice. */
 export const PARABOLIC_TOL = 1e-12;
 
 function wrap2pi(x: number): number {

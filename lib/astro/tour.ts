@@ -407,6 +407,12 @@ export function evaluateTour(spec: TourSpec, ephemeris: Ephemeris, caps?: TourCa
  * has no solution. `spec` supplies the minimum radii. Allocation-free.
  */
 export function tourObjective(result: TourResult, spec: TourSpec, objective: "vinf+dv" | "dv" = "vinf+dv"): number {
+  if (result == null || typeof result !== "object" || !Array.isArray(result.flybys)) {
+    throw new RangeError("tourObjective: result must be a TourResult from evaluateTour");
+  }
+  if (objective !== "vinf+dv" && objective !== "dv") {
+    throw new RangeError(`tourObjective: objective must be 'vinf+dv' or 'dv' (got ${String(objective)})`);
+  }
   let v = result.totalDv + (objective === "vinf+dv" ? result.launch.vinf : 0);
   if (!(v < Infinity)) return Infinity;
   const fl = result.flybys;
