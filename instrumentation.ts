@@ -4,18 +4,8 @@
  * demo's generated secret exists) and applies pending database migrations.
  */
 export async function register() {
-  if (process.env.NEXT_RUNTIME !== "nodejs") return;
-  const { sessionSecret, ConfigError } = await import("./lib/env");
-  try {
-    sessionSecret();
-  } catch (err) {
-    if (err instanceof ConfigError) {
-      console.error(`\n[gybe] cannot start: ${err.message}\n`);
-      process.exit(1);
-    }
-    throw err;
+  if (process.env.NEXT_RUNTIME === "nodejs") {
+    const { startServer } = await import("./lib/startup");
+    await startServer();
   }
-  const { migrateUp } = await import("./lib/db/migrator");
-  const applied = await migrateUp();
-  if (applied.length) console.log(`[gybe] migrations applied: ${applied.join(", ")}`);
 }

@@ -165,7 +165,7 @@ export function ToursTable({ initial, canCreate }: ToursTableProps) {
                   </td>
                   <td className="px-3 py-2.5 text-muted">{t.ownerName}</td>
                   <td className="px-3 py-2.5"><StatusBadge status={t.status} /></td>
-                  <td className="num px-3 py-2.5 text-right">{dateOf(t.launchTdbS)}</td>
+                  <td className="num whitespace-nowrap px-3 py-2.5 text-right">{dateOf(t.launchTdbS)}</td>
                   <td className="px-3 py-2.5 text-right"><Num value={t.c3Km2S2} unit="km²/s²" digits={2} /></td>
                   <td className="px-3 py-2.5 text-right"><Num value={t.totalDvKmS} unit="km/s" digits={3} /></td>
                   <td className="px-3 py-2.5 text-right"><Num value={days(t.tofS)} unit="d" digits={0} /></td>
