@@ -62,6 +62,16 @@ export interface Ephemeris {
   state(body: BodyId, t: number): { r: Vec3; v: Vec3 };
 }
 
+/**
+ * An ephemeris with an allocation-free hot path (used by window scans and searches).
+ * `stateInto(body, t, out, offset = 0)` writes rx, ry, rz (km), vx, vy, vz (km/s), heliocentric
+ * ecliptic J2000, into `out[offset … offset+5]`; t = TDB seconds past J2000. Same values as `state`.
+ * Build one from any Ephemeris with `asFast` (lib/astro/ephemeris.ts).
+ */
+export interface FastEphemeris extends Ephemeris {
+  stateInto(body: BodyId, t: number, out: Float64Array, offset?: number): void;
+}
+
 /** A team's small body, served by both ephemerides as a two-body orbit about the Sun (MU_SUN). */
 export interface CustomBodySpec {
   id: BodyId;
