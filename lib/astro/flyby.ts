@@ -12,7 +12,7 @@ import { assertFinite, assertNonNegative, assertPositive, assertVec3 } from "./v
 
 /**
  * Turn angle δ (rad, in (0, π]) of an unpowered hyperbolic flyby: e = 1 + rp·v∞²/μ, δ = 2·asin(1/e).
- * vinf km/s (≥ 0; 0 gives π), rp km (> 0), mu km³/s² (> 0). Source: Curtis ch. 8 (eq. 8.54 region).
+ * vinf km/s (≥ 0; 0 gives π), rp km (> 0), mu km³/s² (> 0). Source: Curtis ch. 8.
  */
 export function turnAngleFor(vinf: number, rp: number, mu: number): number {
   assertNonNegative("vinf", vinf);

@@ -17,7 +17,7 @@ const TWO_PI = 2 * Math.PI;
  * Stumpff functions C(z) = (1 − cos√z)/z and S(z) = (√z − sin√z)/√z³ (z > 0), with their
  * hyperbolic continuations for z < 0 and the series near z = 0. Writes [C, S] into `out`.
  * Valid for any finite z; for z < about −5e5 the values overflow to Infinity.
- * Source: Curtis §3.7, eqs. 3.50–3.51 (Stumpff functions).
+ * Source: Curtis §3.7 (Stumpff functions; section number from memory).
  */
 export function stumpff(z: number, out: Float64Array | number[] = new Float64Array(2)): Float64Array | number[] {
   if (typeof z !== "number" || Number.isNaN(z) || z === Infinity || z === -Infinity) {

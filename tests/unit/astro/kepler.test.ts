@@ -22,7 +22,7 @@ const energy = (r: Vec3, v: Vec3, mu: number) => (v[0] ** 2 + v[1] ** 2 + v[2] *
 
 describe("stumpff", () => {
   it("matches the closed forms on both sides of the series switch", () => {
-    // C(z) = (1 − cos√z)/z, S(z) = (√z − sin√z)/√z³ (Curtis eqs. 3.50–3.51)
+    // C(z) = (1 − cos√z)/z, S(z) = (√z − sin√z)/√z³ (Stumpff functions, Curtis §3.7, from memory)
     for (const z of [0.0999, 0.1001, -0.0999, -0.1001, 4, -4]) {
       const out = stumpff(z);
       const sz = Math.sqrt(Math.abs(z));
@@ -106,7 +106,7 @@ describe("propagate (universal variables)", () => {
     const vesc = Math.sqrt((2 * MU_E) / rn);
     const s = propagate([rn, 0, 0], [0, vesc, 0], 3 * 86400, MU_E);
     expect(Math.abs(energy(s.r, s.v, MU_E))).toBeLessThan(1e-9);
-    // Barker: parabola time from periapsis, t = √(p³/μ)/2 · (D + D³/3), D = tan(ν/2), p = 2 rp (Curtis eq. 2.? Barker's equation, from memory)
+    // Barker's equation: parabola time from periapsis, t = √(p³/μ)/2 · (D + D³/3), D = tan(ν/2), p = 2 rp (Curtis §3.3, from memory)
     const p = 2 * rn;
     const nu = Math.atan2(s.r[1], s.r[0]);
     const D = Math.tan(nu / 2);
@@ -148,8 +148,8 @@ describe("propagate (universal variables)", () => {
 });
 
 describe("stateToElements / elementsToState", () => {
-  it("Curtis Example 4.3-style elements of a known orbit (closed form: e, a from vis-viva)", () => {
-    // Periapsis state of an orbit with rp = 7000 km, e = 0.2: v = √(μ(1+e)/rp) (vis-viva, Curtis eq. 2.?; common practice)
+  it("elements of a periapsis state: e and a from the vis-viva relation (Curtis ch. 2, common practice)", () => {
+    // Periapsis state of an orbit with rp = 7000 km, e = 0.2: v = √(μ(1+e)/rp) (vis-viva, Curtis ch. 2)
     const rp = 7000, e = 0.2;
     const vp = Math.sqrt((MU_E * (1 + e)) / rp);
     const el = stateToElements([rp, 0, 0], [0, vp, 0], MU_E);
