@@ -148,9 +148,10 @@ function householder(N: number): void {
       x2tof(N);
       tof = R[R_TOF] as number;
     }
-    if (umx2 < 1e-6 && umx2 > -1e-6 && x > 0) {
-      // Within ~5e-7 of the parabola x = 1 the closed-form derivatives are 0/0: take a Newton
-      // step with a central difference of Battin's series instead (rare; accurate to ~1e-8).
+    if (umx2 < 1e-6 && umx2 > -1e-6 && x > 0 && N === 0) {
+      // Within ~5e-7 of the parabola x = 1 the closed-form derivatives are 0/0 (single
+      // revolution; for N ≥ 1, T → ∞ there instead): take a Newton step with a central
+      // difference of Battin's series (rare; derivative accurate to ~1e-8).
       const delta0 = tof - T;
       if (delta0 === 0) {
         it++;
@@ -182,6 +183,34 @@ function householder(N: number): void {
   }
   hhIters = it;
   R[R_X] = x;
+}
+
+/** 2^27 + 1: Dekker's splitting constant for IEEE double. */
+const SPLIT = 134217729;
+
+/**
+ * a·b − c·d with the products formed exactly (Dekker's TwoProduct, T. J. Dekker, "A
+ * floating-point technique for extending the available precision", Numer. Math. 18, 1971) and
+ * the difference compensated: accurate even when a·b ≈ c·d. Used only for nearly collinear r1, r2.
+ */
+function crossComponent(a: number, b: number, c: number, d: number): number {
+  const p = a * b;
+  let t = SPLIT * a;
+  const ah = t - (t - a);
+  const al = a - ah;
+  t = SPLIT * b;
+  const bh = t - (t - b);
+  const bl = b - bh;
+  const ep = al * bl - (((p - ah * bh) - al * bh) - ah * bl);
+  const q = c * d;
+  t = SPLIT * c;
+  const ch = t - (t - c);
+  const cl = c - ch;
+  t = SPLIT * d;
+  const dh = t - (t - d);
+  const dl = d - dh;
+  const eq = cl * dl - (((q - ch * dh) - cl * dh) - ch * dl);
+  return p - q + (ep - eq);
 }
 
 /** Reads component k of a vector argument (tuple or Float64Array) as a number (undefined → NaN). */
@@ -258,13 +287,38 @@ function solveCore(
       "lambert: r1 and r2 are collinear (r1 × r2 = 0), the transfer plane is undefined",
     );
   }
-  const ihn = 1 / hn;
-  hx *= ihn;
-  hy *= ihn;
-  hz *= ihn;
+  let sinTheta = hn;
+  if (hn < 1e-4) {
+    // Nearly collinear (sin θ < 1e-4): the cross product of the rounded unit vectors has a
+    // relative error ~1e-16/sin θ, which tilts the transfer plane. Recompute r1 × r2 from the
+    // raw components with exact products (Dekker's TwoProduct) and a compensated difference.
+    hx = crossComponent(y1, z2, z1, y2);
+    hy = crossComponent(z1, x2, x1, z2);
+    hz = crossComponent(x1, y2, y1, x2);
+    const hr = Math.sqrt(hx * hx + hy * hy + hz * hz);
+    if (hr === 0) {
+      throw new RangeError(
+        "lambert: r1 and r2 are collinear (r1 × r2 = 0), the transfer plane is undefined",
+      );
+    }
+    hx /= hr;
+    hy /= hr;
+    hz /= hr;
+    sinTheta = hr / (r1n * r2n);
+  } else {
+    const ihn = 1 / hn;
+    hx *= ihn;
+    hy *= ihn;
+    hz *= ihn;
+  }
   const omL2 = c / s; // 1 − λ², kept separately for accuracy
-  let l2 = 1 - omL2;
-  if (l2 < 0) l2 = 0;
+  // λ² = 1 − c/s = r1·r2·(1 + cos θ)/(2s²); near 180° take 1 + cos θ = sin²θ/(1 − cos θ)
+  // so that λ keeps full relative accuracy (1 − c/s would cancel).
+  const cth = i1x * i2x + i1y * i2y + i1z * i2z;
+  const sin2 = sinTheta * sinTheta;
+  const opc = cth < 0 ? sin2 / (1 - cth) : 1 + cth;
+  let l2 = (r1n * r2n * opc) / (2 * s * s);
+  if (l2 > 1) l2 = 1;
   let lam = Math.sqrt(l2);
   // Tangential unit vectors t = ĥ_transfer × î (direction of motion).
   let t1x: number;
@@ -383,7 +437,7 @@ function solveCore(
     let yl: number; // y + λx = (1−λ²)/(y − λx)
     if (lx >= 0) {
       B = ly + x;
-      A = P / B;
+      A = B !== 0 ? P / B : ly - x; // B = 0 only when λ = 0 and x = 0
       yl = y + lx;
     } else {
       A = ly - x;
