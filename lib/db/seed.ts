@@ -74,8 +74,8 @@ export function demoTours(): { name: string; owner: Role; status: Tour["status"]
       status: "baselined",
       tour: tourOf(
         [
-          { id: "launch", body: "earth", iso: "2028-12-01T00:00:00Z", half: 45 },
-          { id: "mars", body: "mars", iso: "2029-09-20T00:00:00Z", half: 60 },
+          { id: "launch", body: "earth", iso: "2028-11-24T05:11:00Z", half: 45 },
+          { id: "mars", body: "mars", iso: "2029-09-22T00:10:00Z", half: 60 },
         ],
         { arrival: { kind: "capture", rp: 3396.19 + 400, e: 0.9 } },
       ),
@@ -86,11 +86,11 @@ export function demoTours(): { name: string; owner: Role; status: Tour["status"]
       status: "in_review",
       tour: tourOf(
         [
-          { id: "launch", body: "earth", iso: "2031-03-20T00:00:00Z" },
-          { id: "venus", body: "venus", iso: "2031-07-10T00:00:00Z" },
-          { id: "earth1", body: "earth", iso: "2032-07-01T00:00:00Z" },
-          { id: "earth2", body: "earth", iso: "2034-07-01T00:00:00Z" },
-          { id: "jupiter", body: "jupiter", iso: "2037-01-15T00:00:00Z", half: 120 },
+          { id: "launch", body: "earth", iso: "2031-05-01T19:33:41Z" },
+          { id: "venus", body: "venus", iso: "2031-10-12T12:47:45Z" },
+          { id: "earth1", body: "earth", iso: "2032-07-15T11:40:07Z" },
+          { id: "earth2", body: "earth", iso: "2034-07-15T23:49:21Z" },
+          { id: "jupiter", body: "jupiter", iso: "2038-05-13T20:39:19Z", half: 120 },
         ],
         { arrival: { kind: "capture", rp: 71492 * 10, e: 0.95 } },
       ),
@@ -101,11 +101,11 @@ export function demoTours(): { name: string; owner: Role; status: Tour["status"]
       status: "draft",
       tour: tourOf(
         [
-          { id: "launch", body: "earth", iso: "2029-05-01T00:00:00Z" },
-          { id: "venus", body: "venus", iso: "2029-10-01T00:00:00Z" },
-          { id: "earth", body: "earth", iso: "2031-06-01T00:00:00Z" },
-          { id: "jupiter", body: "jupiter", iso: "2033-01-01T00:00:00Z" },
-          { id: "saturn", body: "saturn", iso: "2036-09-01T00:00:00Z", half: 200 },
+          { id: "launch", body: "earth", iso: "2029-10-15T15:30:49Z" },
+          { id: "venus", body: "venus", iso: "2030-03-17T16:22:46Z" },
+          { id: "earth", body: "earth", iso: "2032-02-06T04:24:26Z" },
+          { id: "jupiter", body: "jupiter", iso: "2034-11-02T00:41:44Z" },
+          { id: "saturn", body: "saturn", iso: "2040-12-08T00:53:21Z", half: 200 },
         ],
         { arrival: { kind: "flyby" } },
       ),
@@ -116,9 +116,9 @@ export function demoTours(): { name: string; owner: Role; status: Tour["status"]
       status: "returned",
       tour: tourOf(
         [
-          { id: "launch", body: "earth", iso: "2030-09-01T00:00:00Z" },
-          { id: "mars", body: "mars", iso: "2031-05-01T00:00:00Z" },
-          { id: "aldra", body: "custom:aldra", iso: "2032-06-01T00:00:00Z" },
+          { id: "launch", body: "earth", iso: "2033-07-21T18:34:00Z" },
+          { id: "mars", body: "mars", iso: "2034-09-28T06:21:00Z" },
+          { id: "aldra", body: "custom:aldra", iso: "2036-07-24T10:55:00Z" },
         ],
         { arrival: { kind: "flyby" } },
       ),
