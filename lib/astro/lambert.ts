@@ -263,6 +263,9 @@ function solveCore(
   if (!(mu > 0 && mu < Infinity)) {
     throw new RangeError(`lambert: mu must be a finite number > 0 km³/s² (got ${mu})`);
   }
+  if (prograde !== true && prograde !== false) {
+    throw new RangeError(`lambert: prograde must be true or false (got ${String(prograde)})`);
+  }
   if (!(maxRevs >= 0 && Number.isInteger(maxRevs))) {
     throw new RangeError(`lambert: maxRevs must be an integer ≥ 0 (got ${maxRevs})`);
   }
@@ -530,9 +533,6 @@ export function lambert(
 ): LambertSolution[] {
   const prograde = options.prograde ?? true;
   const maxRevs = options.maxRevs ?? 0;
-  if (typeof prograde !== "boolean") {
-    throw new RangeError("lambert: options.prograde must be a boolean");
-  }
   // Room for the solutions that can exist: N ≤ min(maxRevs, floor(T/π)) with T the
   // non-dimensional tof (one spare). Bad inputs give cap 0 here and the core throws.
   let cap = 0;

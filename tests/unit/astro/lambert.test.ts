@@ -364,6 +364,8 @@ describe("lambert: input validation", () => {
     ["maxRevs 1.5", () => lambert(r1, r2, 3000, MU_EARTH, { maxRevs: 1.5 }), /maxRevs/],
     ["maxRevs NaN", () => lambert(r1, r2, 3000, MU_EARTH, { maxRevs: NaN }), /maxRevs/],
     ["maxRevs Infinity", () => lambert(r1, r2, 3000, MU_EARTH, { maxRevs: Infinity }), /maxRevs/],
+    ["prograde not a boolean", () => lambert(r1, r2, 3000, MU_EARTH, { prograde: "yes" as unknown as boolean }), /prograde/],
+    ["lambertInto prograde undefined", () => lambertInto(new Float64Array(6), r1, r2, 3000, MU_EARTH, undefined as unknown as boolean, 0), /prograde/],
     ["lambertInto out too short", () => lambertInto(new Float64Array(12), r1, r2, 3000, MU_EARTH, true, 1), /out/],
     ["lambertInto tof 0", () => lambertInto(new Float64Array(6), r1, r2, 0, MU_EARTH, true, 0), /tof/],
   ];
