@@ -5,9 +5,10 @@
  * and the sampled trajectory (Float64Arrays) live in the worker hook, never here.
  *
  * The reducers are pure functions (`applyEdit`, `undo`, `redo`, `resetTo`) so they are tested
- * without React; `useWorkbench` wraps them in a zustand store.
+ * without React; `createWorkbenchStore` wraps them in a zustand store per Workbench.
  */
-import { create } from "zustand";
+import { createContext, useContext } from "react";
+import { createStore, useStore, type StoreApi } from "zustand";
 import type { StoredTour } from "@/lib/validation/tour";
 
 /** Undo depth; older steps are dropped. */
@@ -127,22 +128,36 @@ export interface WorkbenchStore extends EditorState {
   select(nodeId: string | null): void;
 }
 
-const EMPTY: StoredTour = {
-  formatVersion: 1,
-  ephemeris: { kind: "vsop", cached: true },
-  nodes: [],
-  legs: [],
-  arrival: { kind: "flyby" },
-  rpMin: {},
-  aim: {},
-};
+export type WorkbenchStoreApi = StoreApi<WorkbenchStore>;
 
-export const useWorkbench = create<WorkbenchStore>((set) => ({
-  ...initialEditorState(EMPTY, 0),
-  load: (tour, version) => set((s) => resetTo(s, tour, version)),
-  edit: (fn, key) => set((s) => applyEdit(s, fn, key ?? null)),
-  undo: () => set((s) => undo(s)),
-  redo: () => set((s) => redo(s)),
-  markSaved: (saved, version) => set((s) => markSaved(s, saved, version)),
-  select: (nodeId) => set((s) => selectNode(s, nodeId)),
-}));
+/**
+ * One store per mounted Workbench (created with the tour the server loaded), so nothing is
+ * shared between requests during server rendering or between two open tours.
+ */
+export function createWorkbenchStore(tour: StoredTour, version: number, selectedNodeId: string | null = null): WorkbenchStoreApi {
+  return createStore<WorkbenchStore>((set) => ({
+    ...initialEditorState(tour, version, selectedNodeId),
+    load: (t, v) => set((s) => resetTo(s, t, v)),
+    edit: (fn, key) => set((s) => applyEdit(s, fn, key ?? null)),
+    undo: () => set((s) => undo(s)),
+    redo: () => set((s) => redo(s)),
+    markSaved: (saved, v) => set((s) => markSaved(s, saved, v)),
+    select: (nodeId) => set((s) => selectNode(s, nodeId)),
+  }));
+}
+
+export const WorkbenchStoreContext = createContext<WorkbenchStoreApi | null>(null);
+
+/** Read the Workbench store of the nearest <WorkbenchStoreContext.Provider> with a selector. */
+export function useWorkbench<T>(selector: (s: WorkbenchStore) => T): T {
+  const store = useContext(WorkbenchStoreContext);
+  if (!store) throw new Error("useWorkbench must be used inside the Workbench");
+  return useStore(store, selector);
+}
+
+/** The store itself (for event handlers that read state without subscribing). */
+export function useWorkbenchApi(): WorkbenchStoreApi {
+  const store = useContext(WorkbenchStoreContext);
+  if (!store) throw new Error("useWorkbenchApi must be used inside the Workbench");
+  return store;
+}
