@@ -1,11 +1,12 @@
 "use client";
 /**
- * The Orrery's cell in the Workbench grid: adapts the Workbench state to the scene's props.
- * Until the 3D scene lands, a plain placeholder keeps the layout.
+ * The Orrery's cell in the Workbench grid: adapts the Workbench state (draft nodes, worker
+ * samples, selection) to the scene's props. The scene reads the replay time itself.
  */
-import { cn } from "@/components/ui/cn";
+import { useMemo } from "react";
+import { Orrery } from "@/components/scene/orrery";
 import { bodyLabel } from "@/lib/format";
-import type { EphemerisSpec, TourSamples } from "@/lib/astro/types";
+import type { BodyId, EphemerisSpec, TourSamples } from "@/lib/astro/types";
 import type { StoredTour } from "@/lib/validation/tour";
 
 export interface OrreryCellProps {
@@ -19,18 +20,29 @@ export interface OrreryCellProps {
   className?: string;
 }
 
-export function OrreryCell({ nodes, samples, className }: OrreryCellProps) {
+export function OrreryCell({ tourId, label, nodes, samples, ephemeris, selectedNodeId, onSelectNodeIndex, className }: OrreryCellProps) {
+  const tours = useMemo(
+    () => [
+      {
+        id: tourId,
+        label,
+        samples,
+        primary: true,
+        nodes: nodes.map((n, i) => ({ body: n.body as BodyId, epoch: n.epoch, label: `#${i + 1} ${bodyLabel(n.body)}` })),
+      },
+    ],
+    [tourId, label, samples, nodes],
+  );
+  const selected = nodes.findIndex((n) => n.id === selectedNodeId);
   return (
-    <div
-      data-testid="orrery-cell"
-      className={cn("flex items-center justify-center rounded-panel border border-dashed border-line-strong bg-sunken text-sm text-muted", className)}
-    >
-      <div className="text-center">
-        <p>Orrery</p>
-        <p className="mt-1 text-xs text-faint">
-          {nodes.map((n) => bodyLabel(n.body)).join(" → ")} · {samples ? `${samples.epochs.length} samples` : "sampling…"}
-        </p>
-      </div>
-    </div>
+    <Orrery
+      className={className}
+      tours={tours}
+      ephemeris={ephemeris}
+      selectedNode={selected >= 0 ? selected : null}
+      onSelectNode={(id, index) => {
+        if (id === tourId) onSelectNodeIndex(index);
+      }}
+    />
   );
 }
