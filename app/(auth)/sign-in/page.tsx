@@ -1,6 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { Suspense } from "react";
+import { redirect } from "next/navigation";
+import { getCurrentUser } from "@/lib/auth/dal";
 import { GybeMark } from "@/components/brand/gybe-mark";
 import { SignInForm } from "@/components/auth/sign-in-form";
 import { Skeleton } from "@/components/ui/spinner";
@@ -19,7 +21,11 @@ function FormFallback() {
   );
 }
 
-export default function SignInPage() {
+export const dynamic = "force-dynamic";
+
+export default async function SignInPage() {
+  // Someone already signed in goes straight to the team's tours.
+  if (await getCurrentUser()) redirect("/tours");
   return (
     <div className="relative flex min-h-dvh flex-col">
       <div
