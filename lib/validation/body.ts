@@ -69,7 +69,7 @@ export const bodyInputSchema = v.pipe(
   v.forward(
     v.check((b) => {
       const a = b.aKm ?? (b.aAu ?? 0) * AU_KM;
-      return !(a > 0) || a * (1 - b.e) > SUN_RADIUS_KM;
+      return !(a > 0) || !(b.e >= 0 && b.e < 1) || a * (1 - b.e) > SUN_RADIUS_KM; // other checks report bad a or e
     }, "perihelion a(1 − e) must be outside the Sun (> 695,700 km)"),
     ["e"],
   ),
