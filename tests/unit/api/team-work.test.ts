@@ -375,11 +375,11 @@ describe("team members", () => {
     expect(r.status).toBe(200);
     expect(r.body).toMatchObject({ role: "analyst", active: true });
     await as(VIEWER, PW);
-    expect((await call(membersRoute.GET())).status).toBe(200);
+    expect((await call(membersRoute.GET(req("GET", "/api/team/members"), {}))).status).toBe(200);
     await as(LEAD, PW);
     expect((await patch(await uid(VIEWER), { active: false })).body.active).toBe(false);
     useJar(VIEWER); // the viewer's existing session stops working
-    expect((await call(membersRoute.GET())).status).toBe(401);
+    expect((await call(membersRoute.GET(req("GET", "/api/team/members"), {}))).status).toBe(401);
     await as(LEAD, PW);
     expect((await patch(await uid(VIEWER), { active: true })).body.active).toBe(true);
     expect(await AuditEvent.count({ where: { action: "member.deactivate", target: `user:${await uid(VIEWER)}` } })).toBe(1);
@@ -408,14 +408,14 @@ describe("invitations", () => {
   const tokenFrom = (text: string) => /\/invite\/([A-Za-z0-9_-]{43})/.exec(text)?.[1] ?? "";
   const getInv = (token: string) => call(acceptRoute.GET(req("GET", `/api/invitations/${token}`), ctx({ token })));
   const accept = (token: string, body: unknown, raw?: string) => call(acceptRoute.POST(req("POST", `/api/invitations/${token}`, body, raw), ctx({ token })));
-  const invite = (body: unknown, raw?: string) => call(invitationsRoute.POST(req("POST", "/api/team/invitations", body, raw)));
+  const invite = (body: unknown, raw?: string) => call(invitationsRoute.POST(req("POST", "/api/team/invitations", body, raw), {}));
 
   it("only a lead may list or create invitations", async () => {
     anonymous();
-    expect((await call(invitationsRoute.GET())).status).toBe(401);
+    expect((await call(invitationsRoute.GET(req("GET", "/api/team/invitations"), {}))).status).toBe(401);
     for (const who of [DESIGNER, ANALYST, VIEWER]) {
       await as(who, PW);
-      expect((await call(invitationsRoute.GET())).status).toBe(403);
+      expect((await call(invitationsRoute.GET(req("GET", "/api/team/invitations"), {}))).status).toBe(403);
       expect((await invite({ email: "x@alder.example", role: "viewer" })).status).toBe(403);
     }
   });
@@ -445,7 +445,7 @@ describe("invitations", () => {
     expect(stored!.tokenHash).not.toContain(token);
     expect(stored!.expiresAt.getTime() - Date.now()).toBeGreaterThan(6.9 * 86400_000);
 
-    const list = await call(invitationsRoute.GET());
+    const list = await call(invitationsRoute.GET(req("GET", "/api/team/invitations"), {}));
     expect(list.body.items.map((i: { email: string }) => i.email)).toContain("nadia@alder.example");
 
     useJar("nadia");
@@ -455,12 +455,12 @@ describe("invitations", () => {
     expect((await accept(token, { name: "Nadia", password: "short" })).body.issues[0].path).toBe("password");
     expect((await accept(token, { name: "", password: "long-enough-password" })).body.issues[0].path).toBe("name");
     expect((await accept(token, undefined, "{")).body.error).toBe("invalid_json");
-    expect((await call(membersRoute.GET())).status).toBe(401);
+    expect((await call(membersRoute.GET(req("GET", "/api/team/members"), {}))).status).toBe(401);
 
     const ok = await accept(token, { name: "Nadia Brandt", password: "long-enough-password" });
     expect(ok.status).toBe(201);
     expect(ok.body.user).toMatchObject({ name: "Nadia Brandt", email: "nadia@alder.example", role: "analyst", teamName: "Alder Flight Studio" });
-    const members = await call(membersRoute.GET()); // the session cookie is set
+    const members = await call(membersRoute.GET(req("GET", "/api/team/members"), {})); // the session cookie is set
     expect(members.status).toBe(200);
     expect(members.body.items.map((m: { email: string }) => m.email)).toContain("nadia@alder.example");
     await as("nadia@alder.example", "long-enough-password"); // and the password works for sign-in
@@ -510,12 +510,12 @@ describe("invitations", () => {
 describe("audit trail", () => {
   it("is for leads only and lists who did what", async () => {
     anonymous();
-    expect((await call(auditRoute.GET(req("GET", "/api/audit")))).status).toBe(401);
+    expect((await call(auditRoute.GET(req("GET", "/api/audit"), {}))).status).toBe(401);
     await as(DESIGNER, PW);
-    expect((await call(auditRoute.GET(req("GET", "/api/audit")))).status).toBe(403);
+    expect((await call(auditRoute.GET(req("GET", "/api/audit"), {}))).status).toBe(403);
     await as(LEAD, PW);
-    expect((await call(auditRoute.GET(req("GET", "/api/audit?limit=abc")))).status).toBe(400);
-    const r = await call(auditRoute.GET(req("GET", "/api/audit")));
+    expect((await call(auditRoute.GET(req("GET", "/api/audit?limit=abc"), {}))).status).toBe(400);
+    const r = await call(auditRoute.GET(req("GET", "/api/audit"), {}));
     expect(r.status).toBe(200);
     const actions = r.body.items.map((a: { action: string }) => a.action);
     for (const a of ["tour.review.submit", "tour.review.return", "tour.review.baseline", "invitation.create", "invitation.accept", "member.deactivate", "comment.create"]) {
@@ -524,7 +524,7 @@ describe("audit trail", () => {
     expect(r.body.items.find((a: { action: string }) => a.action === "tour.review.return").actorName).toBe("Ana Lead");
     // Birch's events are not in Alder's trail.
     await as(BIRCH_LEAD, PW);
-    const birch = await call(auditRoute.GET(req("GET", "/api/audit")));
+    const birch = await call(auditRoute.GET(req("GET", "/api/audit"), {}));
     expect(birch.body.items.map((a: { action: string }) => a.action)).not.toContain("invitation.create");
   });
 });
