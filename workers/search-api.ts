@@ -74,8 +74,7 @@ export const searchApi = {
     task: IslandTask,
     onProgress?: (p: SearchProgress) => void,
   ): Promise<{ candidates: SearchCandidate[]; evaluations: number }> {
-    ephemerisFor(task.ephemeris); // fail early on a bad spec
-    return runIsland(task, onProgress);
+    return runIsland(task, onProgress, undefined, ephemerisFor(task.ephemeris));
   },
 };
 

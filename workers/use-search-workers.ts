@@ -237,6 +237,11 @@ export function useSearchWorkers() {
         if (res === "cancelled") {
           outcome = { ...bestSoFar(req, last), cancelled: true, elapsedS: (performance.now() - t0) / 1000, workers: n };
         } else {
+          const evaluations = res.reduce((s, r) => s + r.evaluations, 0);
+          const best = res.reduce((b, r) => Math.min(b, r.candidates[0]?.value ?? Infinity), Infinity);
+          if (best < Infinity) history.push({ evaluations, best });
+          const elapsedS = (performance.now() - t0) / 1000;
+          setProgress({ kind: "search", done: evaluations, total: req.budget, best, elapsedS, etaS: 0, history: history.slice() });
           outcome = {
             candidates: mergeCandidates(res.map((r) => r.candidates)),
             evaluations: res.reduce((s, r) => s + r.evaluations, 0),

@@ -31,7 +31,7 @@ export interface ContourPlotProps {
 
 const W = 720;
 const H = 440;
-const M = { top: 12, right: 16, bottom: 44, left: 76 };
+const M = { top: 12, right: 16, bottom: 44, left: 96 };
 const fmtDate = (d: Date) => d.toISOString().slice(0, 10);
 
 function dateOfTdb(t: number): Date {
@@ -206,35 +206,35 @@ export function ContourPlot(p: ContourPlotProps) {
           }}
         />
         {/* axes */}
-        <g transform={`translate(0,${H})`} fontSize={11} fill="#9aa7b4">
+        <g transform={`translate(0,${H})`} fontSize={11} fill="currentColor">
           <line x1={0} x2={W} stroke="#536170" />
           {xTicks
             .filter((t) => t.x >= 0 && t.x <= W)
             .map((t) => (
               <g key={t.label} transform={`translate(${t.x},0)`}>
                 <line y2={5} stroke="#536170" />
-                <text y={18} textAnchor="middle" className="num" fill="#9aa7b4">
+                <text y={18} textAnchor="middle" className="num" fill="currentColor">
                   {t.label}
                 </text>
               </g>
             ))}
-          <text x={W / 2} y={38} textAnchor="middle" fill="#c9d4de">
+          <text x={W / 2} y={38} textAnchor="middle" className="text-ink" fill="currentColor">
             Departure (UTC)
           </text>
         </g>
-        <g fontSize={11}>
+        <g fontSize={11} className="text-muted" fill="currentColor">
           <line y1={0} y2={H} stroke="#536170" />
           {yTicks
             .filter((t) => t.y >= 0 && t.y <= H)
             .map((t) => (
               <g key={t.label} transform={`translate(0,${t.y})`}>
                 <line x2={-5} stroke="#536170" />
-                <text x={-8} dy={4} textAnchor="end" className="num" fill="#9aa7b4">
+                <text x={-8} dy={4} textAnchor="end" className="num" fill="currentColor">
                   {t.label}
                 </text>
               </g>
             ))}
-          <text transform={`translate(${-M.left + 14},${H / 2}) rotate(-90)`} textAnchor="middle" fill="#c9d4de">
+          <text transform={`translate(${-M.left + 12},${H / 2}) rotate(-90)`} textAnchor="middle" className="text-ink" fill="currentColor">
             {p.mode === "arrival" ? "Arrival (UTC)" : "Flight time"}
           </text>
         </g>

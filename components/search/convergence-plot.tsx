@@ -29,12 +29,12 @@ export function ConvergencePlot({ history, total }: { history: { evaluations: nu
   }
   return (
     <svg viewBox={`0 0 ${W + M.left + M.right} ${H + M.top + M.bottom}`} className="w-full" role="img" aria-label="Convergence: best value against evaluations" data-testid="convergence-plot">
-      <g transform={`translate(${M.left},${M.top})`} fontSize={11}>
+      <g transform={`translate(${M.left},${M.top})`} fontSize={11} className="text-muted" fill="currentColor">
         <rect width={W} height={H} fill="#0f1622" />
         {y.ticks(5).map((t) => (
           <g key={t} transform={`translate(0,${y(t)})`}>
             <line x2={W} stroke="#263240" />
-            <text x={-6} dy={4} textAnchor="end" className="num" fill="#9aa7b4">
+            <text x={-6} dy={4} textAnchor="end" className="num" fill="currentColor">
               {formatNum(t, 2)}
             </text>
           </g>
@@ -42,16 +42,16 @@ export function ConvergencePlot({ history, total }: { history: { evaluations: nu
         {x.ticks(5).map((t) => (
           <g key={t} transform={`translate(${x(t)},${H})`}>
             <line y2={4} stroke="#536170" />
-            <text y={16} textAnchor="middle" className="num" fill="#9aa7b4">
+            <text y={16} textAnchor="middle" className="num" fill="currentColor">
               {t >= 1e6 ? `${t / 1e6}M` : t >= 1e3 ? `${t / 1e3}k` : t}
             </text>
           </g>
         ))}
         <path d={d} fill="none" stroke="#ffb347" strokeWidth={1.8} />
-        <text x={W / 2} y={H + 30} textAnchor="middle" fill="#c9d4de">
+        <text x={W / 2} y={H + 30} textAnchor="middle" className="text-ink" fill="currentColor">
           Objective evaluations
         </text>
-        <text transform={`translate(${-44},${H / 2}) rotate(-90)`} textAnchor="middle" fill="#c9d4de">
+        <text transform={`translate(${-44},${H / 2}) rotate(-90)`} textAnchor="middle" className="text-ink" fill="currentColor">
           Best (km/s)
         </text>
       </g>

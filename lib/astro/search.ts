@@ -977,18 +977,20 @@ export interface IslandTask {
 
 /**
  * Runs island `task.island` of `task.islands`: seed = task.seed + island, budget = its share of
- * task.budget. The ephemeris is built from the spec (vsop → cachedEphemeris, mean → direct).
+ * task.budget. The ephemeris is built from the spec (vsop → cachedEphemeris, mean → direct)
+ * unless the caller passes one built from the same spec (a worker keeps its cache between runs).
  */
 export async function runIsland(
   task: IslandTask,
   onProgress?: (p: SearchProgress) => void,
   signal?: AbortSignal,
+  ephemeris?: Ephemeris,
 ): Promise<{ candidates: SearchCandidate[]; evaluations: number }> {
   if (task == null || typeof task !== "object") throw new RangeError("task must be an IslandTask object");
   const { island, islands } = task;
   if (!Number.isInteger(islands) || islands < 1) throw new RangeError("islands must be a whole number ≥ 1");
   if (!Number.isInteger(island) || island < 0 || island >= islands) throw new RangeError("island must be in 0 … islands − 1");
-  const eph = ephemerisFromSpec({ ...task.ephemeris, cached: task.ephemeris.kind === "vsop" ? true : task.ephemeris.cached });
+  const eph = ephemeris ?? ephemerisFromSpec({ ...task.ephemeris, cached: task.ephemeris.kind === "vsop" ? true : task.ephemeris.cached });
   return optimizeTour(task.spec, task.bounds, eph, {
     seed: task.seed + island,
     budget: islandBudget(task.budget, island, islands),
