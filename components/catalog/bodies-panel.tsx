@@ -95,16 +95,16 @@ export function BodiesPanel({ initial, canEdit }: BodiesPanelProps) {
       ) : (
         <div className="overflow-x-auto">
           <table className="w-full min-w-[1100px] text-sm" aria-label="Team small bodies">
-            <thead className="bg-raised text-left text-xs uppercase tracking-wide text-muted">
+            <thead className="bg-raised text-left text-xs text-muted">
               <tr>
                 <th className="px-4 py-2 font-medium">Name · id</th>
                 <th className="px-3 py-2 font-medium">Epoch (UTC)</th>
-                <th className="px-3 py-2 text-right font-medium">a</th>
+                <th className="px-3 py-2 text-right font-medium" title="Semi-major axis">a</th>
                 <th className="px-3 py-2 text-right font-medium">e</th>
                 <th className="px-3 py-2 text-right font-medium">i</th>
                 <th className="px-3 py-2 text-right font-medium">Ω</th>
                 <th className="px-3 py-2 text-right font-medium">ω</th>
-                <th className="px-3 py-2 text-right font-medium">M · ν</th>
+                <th className="px-3 py-2 text-right font-medium" title="Mean anomaly at epoch; true anomaly beneath">M · ν</th>
                 <th className="px-3 py-2 text-right font-medium">GM</th>
                 <th className="px-3 py-2 text-right font-medium">Radius · min alt</th>
                 <th className="px-3 py-2 font-medium">Used by</th>
@@ -126,12 +126,12 @@ export function BodiesPanel({ initial, canEdit }: BodiesPanelProps) {
                   <td className="px-3 py-2 text-right align-top"><Num value={b.input.argpDeg} unit="°" digits={2} /></td>
                   <td className="px-3 py-2 text-right align-top">
                     <Num value={b.input.mDeg} unit="°" digits={2} title="Mean anomaly at epoch" />
-                    <div className="text-xs text-muted"><Num value={b.nuDeg} unit="° ν" digits={2} title="True anomaly at epoch" /></div>
+                    <div className="text-xs text-muted" title="True anomaly at epoch">ν <Num value={b.nuDeg} unit="°" digits={2} /></div>
                   </td>
                   <td className="px-3 py-2 text-right align-top"><Num value={b.input.muKm3S2} unit="km³/s²" digits={3} /></td>
                   <td className="px-3 py-2 text-right align-top">
                     <Num value={b.input.radiusKm} unit="km" digits={1} />
-                    <div className="text-xs text-muted"><Num value={b.input.minAltKm} unit="km alt" digits={0} /></div>
+                    <div className="text-xs text-muted">min alt <Num value={b.input.minAltKm} unit="km" digits={0} /></div>
                   </td>
                   <td className="px-3 py-2 align-top text-xs">
                     {b.usedBy.length === 0 ? (

@@ -5,7 +5,7 @@ import { tagOf } from "./tour-tag";
 
 const W = 880;
 const LABEL_W = 200;
-const RIGHT = 190;
+const RIGHT = 250;
 const ROW_H = 58;
 const TOP = 34;
 
@@ -22,7 +22,7 @@ export function DvBars({ items }: { items: CompareItem[] }) {
   const H = TOP + items.length * ROW_H + 8;
   return (
     <figure className="space-y-2">
-      <svg viewBox={`0 0 ${W} ${H}`} className="h-auto w-full" role="img" aria-labelledby="dv-bars-title dv-bars-desc">
+      <svg viewBox={`0 0 ${W} ${H}`} className="h-auto w-full max-w-[1000px]" role="img" aria-labelledby="dv-bars-title dv-bars-desc">
         <title id="dv-bars-title">Δv budget per tour, km/s, common scale</title>
         <desc id="dv-bars-desc">
           {items.map((i, k) => `${tagOf(k)} ${i.name}: flybys ${formatNum(i.dv.flybyDvKmS, 3)} km/s, arrival ${formatNum(i.dv.arrivalDvKmS, 3)} km/s, launch v∞ ${formatNum(i.dv.launchVinfKmS, 3)} km/s.`).join(" ")}
@@ -39,7 +39,7 @@ export function DvBars({ items }: { items: CompareItem[] }) {
             <text x={x(t)} y={TOP - 12} textAnchor="middle" className="fill-muted font-mono text-[11px]">{t}</text>
           </g>
         ))}
-        <text x={W - RIGHT} y={12} textAnchor="end" className="fill-faint text-[11px]">km/s</text>
+        <text x={W - RIGHT + 22} y={TOP - 12} className="fill-faint text-[11px]">km/s</text>
         {items.map((i, k) => {
           const y = TOP + k * ROW_H + 6;
           const fly = i.dv.flybyDvKmS;

@@ -24,6 +24,8 @@ interface Row {
   label: string;
   hint?: string;
   cell: (i: CompareItem) => ReactNode;
+  /** Shown under the value (and under the best badge). */
+  detail?: (i: CompareItem) => ReactNode;
 }
 
 const ROWS: Row[] = [
@@ -42,17 +44,18 @@ const ROWS: Row[] = [
       i.flybys.length === 0 ? (
         <span className="text-xs text-faint">no flybys</span>
       ) : (
-        <>
-          <Num value={i.minFlybyMarginKm} unit="km" digits={0} group className={i.minFlybyMarginKm !== null && i.minFlybyMarginKm < 0 ? "text-bad" : undefined} />
-          <ul className="mt-1 space-y-0.5 text-xs text-muted">
-            {i.flybys.map((f) => (
-              <li key={f.nodeId} className="whitespace-nowrap">
-                {bodyLabel(f.body)}: <Num value={f.marginKm} unit="km" digits={0} group />
-                {f.marginKm !== null && f.marginKm < 0 ? <span className="ml-1 font-medium text-bad">below limit</span> : null}
-              </li>
-            ))}
-          </ul>
-        </>
+        <Num value={i.minFlybyMarginKm} unit="km" digits={0} group className={i.minFlybyMarginKm !== null && i.minFlybyMarginKm < 0 ? "text-bad" : undefined} />
+      ),
+    detail: (i) =>
+      i.flybys.length === 0 ? null : (
+        <ul className="mt-1 space-y-0.5 text-xs text-muted" aria-label={`Flyby margins of ${i.name}`}>
+          {i.flybys.map((f) => (
+            <li key={f.nodeId} className="whitespace-nowrap">
+              {bodyLabel(f.body)} <Num value={f.marginKm} unit="km" digits={0} group />
+              {f.marginKm !== null && f.marginKm < 0 ? <span className="ml-1 font-medium text-bad">below limit</span> : null}
+            </li>
+          ))}
+        </ul>
       ),
   },
   {
@@ -103,10 +106,11 @@ export function MetricsTable({ items }: { items: CompareItem[] }) {
                 </th>
                 {items.map((i) => (
                   <td key={i.id} className="px-4 py-2.5 align-top" data-best={best.includes(i.id) ? "true" : undefined}>
-                    <div className="flex flex-wrap items-center">
+                    <div className="flex flex-wrap items-center gap-y-1">
                       {r.cell(i)}
                       {best.includes(i.id) ? <BestMark /> : null}
                     </div>
+                    {r.detail?.(i)}
                   </td>
                 ))}
               </tr>

@@ -29,7 +29,7 @@ export function Timelines({ items }: { items: CompareItem[] }) {
   const yearly = ticks.every((t) => t.getUTCMonth() === 0 && t.getUTCDate() === 1);
   return (
     <figure className="space-y-2">
-      <svg viewBox={`0 0 ${W} ${H}`} className="h-auto w-full" role="img" aria-labelledby="tl-title tl-desc">
+      <svg viewBox={`0 0 ${W} ${H}`} className="h-auto w-full max-w-[1000px]" role="img" aria-labelledby="tl-title tl-desc">
         <title id="tl-title">Tour timelines on a common date axis</title>
         <desc id="tl-desc">
           {items.map((i, k) => `${tagOf(k)} ${i.name}: ${i.nodes.map((n) => `${bodyLabel(n.body)} ${dateOf(n.epoch)}`).join(", ")}.`).join(" ")}
