@@ -77,7 +77,7 @@ export function BodiesUpload({ onImported }: BodiesUploadProps) {
             className="block text-sm text-muted file:mr-3 file:h-8 file:rounded-md file:border file:border-line-strong file:bg-raised file:px-3 file:text-sm file:text-ink hover:file:border-muted"
           />
         </label>
-        <Button type="submit" variant="secondary" size="sm" pending={pending}>Upload CSV</Button>
+        <Button type="submit" variant="primary" size="sm" pending={pending}>Import file</Button>
       </div>
       {done ? <p role="status" className="rounded-md border border-ok/40 bg-ok-soft px-3 py-2 text-sm text-ok">{done}</p> : null}
       {error ? (
