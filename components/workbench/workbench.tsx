@@ -264,7 +264,7 @@ function WorkbenchInner({ detail: initial, canEditChain, canEditAim, canSearch, 
         </p>
       ) : null}
       {saveError ? (
-        <p role="alert" className="rounded-md border border-bad/50 bg-bad-soft px-3 py-2 text-sm text-bad">
+        <p role="alert" data-testid="save-error" className="rounded-md border border-bad/50 bg-bad-soft px-3 py-2 text-sm text-bad">
           Not saved: {saveError}
         </p>
       ) : null}
