@@ -6,6 +6,7 @@ import "server-only";
 import { cookies } from "next/headers";
 import { getIronSession } from "iron-session";
 import { sessionOptions, type SessionData } from "./session";
+import "@/lib/db/sequelize"; // initialises the models in this bundle (see lib/db/sequelize.ts)
 import { User, Team } from "@/models";
 import type { Role } from "./roles";
 

@@ -4,6 +4,7 @@
  * resets the count. Messages never reveal whether the address exists.
  */
 import "server-only";
+import "@/lib/db/sequelize"; // initialises the models in this bundle (see lib/db/sequelize.ts)
 import { SignInThrottle, User } from "@/models";
 import { verifyPassword } from "./password";
 import { HttpError } from "@/lib/server/http";

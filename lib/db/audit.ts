@@ -1,4 +1,5 @@
 /** Write an audit event: who (actor) did what (action) to which record (target), with details. */
+import "@/lib/db/sequelize"; // initialises the models in this bundle (see lib/db/sequelize.ts)
 import { AuditEvent } from "@/models";
 import type { Transaction } from "sequelize";
 

@@ -5,6 +5,7 @@
  */
 import nodemailer, { type SendMailOptions, type Transporter } from "nodemailer";
 import type SMTPTransport from "nodemailer/lib/smtp-transport";
+import "@/lib/db/sequelize"; // initialises the models in this bundle (see lib/db/sequelize.ts)
 import { MailMessage } from "@/models";
 
 export interface OutgoingMail {

@@ -1,4 +1,5 @@
 /** The team's custom small bodies, as the computation core wants them. */
+import "@/lib/db/sequelize"; // initialises the models in this bundle (see lib/db/sequelize.ts)
 import { CustomBody } from "@/models";
 import type { TeamBody } from "@/lib/tours/evaluate";
 import type { BodyId } from "@/lib/astro/types";

@@ -1,4 +1,5 @@
 import "server-only";
+import "@/lib/db/sequelize"; // initialises the models in this bundle (see lib/db/sequelize.ts)
 import { MailMessage, User, AuditEvent } from "@/models";
 import type { CurrentUser } from "@/lib/auth/dal";
 
