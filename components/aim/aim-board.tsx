@@ -113,6 +113,18 @@ function parseDraft(d: DispersionDraft): { value: Dispersion | null; threshold: 
   return { value, threshold: errors.threshold ? null : th, errors };
 }
 
+const FALLBACK_COLORS: PlotColors = {
+  background: "#0c1019",
+  grid: "#2a3142",
+  axis: "#a3abbd",
+  text: "#e8ecf3",
+  faint: "#7b8396",
+  accent: "#f0a24a",
+  impact: "#e8766b",
+  minAlt: "#e9d37a",
+  planned: "#8fb4e6",
+};
+
 function plotColors(): PlotColors {
   return {
     background: cssColor("--gy-sunken", "#0c1019"),
@@ -135,7 +147,14 @@ export function AimBoard(props: AimBoardProps) {
   const nodeId = node.id;
   const saved = stored.aim[nodeId];
 
-  const setup = useMemo(() => buildSetup(stored, customBodies, nodeIndex), [stored, customBodies, nodeIndex]);
+  // The computation runs in the browser only (after mount): the server render shows a placeholder,
+  // so that floating-point digits never differ between the server and the client.
+  const [mounted, setMounted] = useState(false);
+  useEffect(() => setMounted(true), []);
+  const setup = useMemo<Setup>(
+    () => (mounted ? buildSetup(stored, customBodies, nodeIndex) : { ok: false, error: "pending" }),
+    [mounted, stored, customBodies, nodeIndex],
+  );
   const [pole, setPole] = useState<AimPole>(saved?.pole ?? "ecliptic");
   const ctx = setup.ok ? (setup.ctx[pole] ?? setup.ctx.ecliptic ?? null) : null;
 
@@ -300,7 +319,10 @@ export function AimBoard(props: AimBoardProps) {
 
   // ---- export ----
   const svgRef = useRef<SVGSVGElement | null>(null);
-  const colors = useMemo(() => plotColors(), []);
+  // Resolved after mount: the server render and the first client render use the same fallbacks.
+  // The plot renders only after mount, with colours resolved from the theme (no SSR mismatch).
+  const [colors, setColors] = useState<PlotColors | null>(null);
+  useEffect(() => setColors(plotColors()), []);
   const [exportError, setExportError] = useState<string | null>(null);
   const exportPng = async () => {
     if (!svgRef.current) return;
@@ -318,8 +340,8 @@ export function AimBoard(props: AimBoardProps) {
       await exportBoardPng(svgRef.current, {
         title: `${name} · ${bodyLabel(node.body)} flyby ${dateOf(node.epoch)} · Aim board`,
         lines,
-        background: colors.background,
-        text: colors.text,
+        background: (colors ?? FALLBACK_COLORS).background,
+        text: (colors ?? FALLBACK_COLORS).text,
         fileName: `aim-board-${tourId}-${nodeId}.png`,
       });
     } catch (err) {
@@ -410,7 +432,13 @@ export function AimBoard(props: AimBoardProps) {
       ) : null}
       {exportError ? <p className="text-sm text-bad">Export failed: {exportError}</p> : null}
 
-      {!setup.ok || !ctx ? (
+      {!mounted ? (
+        <Card>
+          <CardBody>
+            <p className="text-sm text-muted">Computing the flyby…</p>
+          </CardBody>
+        </Card>
+      ) : !setup.ok || !ctx ? (
         <Card>
           <CardBody>
             <p className="text-sm text-bad" data-testid="aim-unavailable">
@@ -440,6 +468,7 @@ export function AimBoard(props: AimBoardProps) {
                 }
               />
               <div className="p-3">
+                {colors ? (
                 <BPlanePlot
                   ref={svgRef}
                   extent={extent}
@@ -453,6 +482,9 @@ export function AimBoard(props: AimBoardProps) {
                   colors={colors}
                   onAim={onAim}
                 />
+                ) : (
+                  <div className="aspect-square w-full max-w-[560px] rounded bg-sunken" aria-hidden />
+                )}
               </div>
               <div className="flex flex-wrap items-center gap-2 border-t border-line px-4 py-3 text-sm">
                 <span className="text-xs uppercase tracking-wide text-faint">Pole</span>

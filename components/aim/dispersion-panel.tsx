@@ -36,7 +36,7 @@ export interface DispersionPanelProps {
 export function formatProbability(p: number): string {
   if (!Number.isFinite(p)) return "—";
   if (p < 1e-12) return "< 1e-12";
-  if (p < 1e-3) return p.toExponential(1);
+  if (p < 0.01) return p.toExponential(1);
   if (p > 1 - 1e-6) return "≈ 1";
   return formatNum(p, 4);
 }

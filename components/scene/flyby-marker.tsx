@@ -6,7 +6,8 @@
  */
 import { useMemo, useRef, useState } from "react";
 import { useFrame } from "@react-three/fiber";
-import { Billboard, Html } from "@react-three/drei";
+import { Billboard } from "@react-three/drei";
+import { SceneLabel } from "./scene-label";
 import type { Group } from "three";
 import type { BodyId } from "@/lib/astro/types";
 import { useSceneFrame, worldPerPixel } from "./scene-frame";
@@ -71,14 +72,7 @@ export function FlybyMarker({ body, epoch, label, color, selected = false, sizeP
         </mesh>
       </Billboard>
       {selected || hover ? (
-        <Html center className="pointer-events-none select-none" zIndexRange={[20, 10]}>
-          <span
-            className="relative block whitespace-nowrap rounded bg-canvas/80 px-1.5 py-0.5 text-[11px] leading-none text-ink"
-            style={{ top: `-${sizePx + 8}px` }}
-          >
-            {label}
-          </span>
-        </Html>
+        <SceneLabel text={label} front className="rounded bg-canvas/85 px-1.5 py-1 text-ink" offsetPx={[0, -(sizePx + 16)]} />
       ) : null}
     </group>
   );

@@ -63,8 +63,8 @@ export function FocusRig({ focus, mode }: FocusRigProps) {
     toSceneInto(s.scene, 0, s.km[0]!, s.km[1]!, s.km[2]!, o, mode);
     if (!controls) return;
     if (s.reset) {
-      const dist = focus === "sun" ? (mode === "log" ? 3.4 : 4.2) * SCENE_UNITS_PER_AU : 0.45 * SCENE_UNITS_PER_AU;
-      s.offset.set(0, -0.75, 0.66).normalize().multiplyScalar(dist);
+      const dist = focus === "sun" ? (mode === "log" ? 5.4 : 14) * SCENE_UNITS_PER_AU : 0.45 * SCENE_UNITS_PER_AU;
+      s.offset.set(0, -0.6, 0.8).normalize().multiplyScalar(dist);
       s.reset = false;
     } else {
       s.offset.copy(camera.position).sub(controls.target);

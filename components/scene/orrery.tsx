@@ -11,7 +11,7 @@
 import { useMemo, useState } from "react";
 import { Canvas } from "@react-three/fiber";
 import { OrbitControls } from "@react-three/drei";
-import { ephemerisFromSpec } from "@/lib/astro/ephemeris";
+import { ephemerisFromSpec, meanElementsEphemeris } from "@/lib/astro/ephemeris";
 import { PLANET_IDS } from "@/lib/astro/constants";
 import type { BodyId, Ephemeris, EphemerisSpec, TourSamples } from "@/lib/astro/types";
 import { bodyLabel } from "@/lib/format";
@@ -66,7 +66,10 @@ let versionSeed = 1;
 function buildEphemerides(spec: EphemerisSpec): { fast: Ephemeris; orbits: Ephemeris } | { error: string } {
   try {
     const fast = ephemerisFromSpec({ ...spec, cached: spec.kind === "vsop" ? true : spec.cached });
-    const orbits = ephemerisFromSpec({ ...spec, cached: false });
+    // Orbit lines span decades per body: sample them from the mean-elements ephemeris (the JPL
+    // table of approximate elements; a Kepler solve per point, ~100× cheaper than the series).
+    // Its error (≤ ~600,000 km for Jupiter) is below a pixel at the scale of a whole orbit.
+    const orbits = meanElementsEphemeris(spec.customBodies ? { customBodies: spec.customBodies } : {});
     return { fast, orbits };
   } catch (err) {
     return { error: err instanceof Error ? err.message : String(err) };
@@ -198,7 +201,7 @@ export function Orrery({ tours, ephemeris, focus, onFocusChange, selectedNode = 
           <OrbitControls makeDefault enableDamping={false} minDistance={0.01} maxDistance={600} />
         </Canvas>
       )}
-      <div className="pointer-events-none absolute inset-x-0 top-0 flex flex-wrap items-start justify-between gap-2 p-2">
+      <div className="pointer-events-none absolute inset-x-0 top-0 z-10 flex flex-wrap items-start justify-between gap-2 p-2">
         <div className="pointer-events-auto flex flex-wrap items-center gap-1 rounded-md border border-line bg-canvas/85 p-1" role="group" aria-label="Focus">
           <span className="px-1.5 text-[11px] uppercase tracking-wide text-faint">Focus</span>
           <OverlayButton active={currentFocus === "sun"} onClick={() => chooseFocus("sun")} testId="orrery-focus-sun">
@@ -220,7 +223,7 @@ export function Orrery({ tours, ephemeris, focus, onFocusChange, selectedNode = 
           </OverlayButton>
         </div>
       </div>
-      <div className="pointer-events-none absolute bottom-2 left-2 flex flex-wrap items-center gap-3 rounded-md border border-line bg-canvas/85 px-2 py-1 text-[11px] text-muted">
+      <div className="pointer-events-none absolute bottom-2 left-2 z-10 flex flex-wrap items-center gap-3 rounded-md border border-line bg-canvas/85 px-2 py-1 text-[11px] text-muted">
         <span className="flex items-center gap-1">
           <svg width="10" height="10" viewBox="0 0 10 10" aria-hidden>
             <path d="M5 0 10 5 5 10 0 5Z" fill="var(--gy-accent)" />

@@ -7,7 +7,7 @@
  */
 import { useRef } from "react";
 import { useFrame } from "@react-three/fiber";
-import { Html } from "@react-three/drei";
+import { SceneLabel } from "./scene-label";
 import { DoubleSide, type Group } from "three";
 import { useTimeline } from "@/lib/client/timeline-store";
 import type { BodyId } from "@/lib/astro/types";
@@ -69,16 +69,7 @@ export function PlanetMarker({ body, label, color, sizePx, shape = "sphere", emp
           <meshBasicMaterial color={color} side={DoubleSide} transparent opacity={0.7} />
         </mesh>
       ) : null}
-      <Html center className="pointer-events-none select-none" zIndexRange={[10, 0]}>
-        <span
-          className={
-            "relative block whitespace-nowrap text-[11px] leading-none " + (emphasis ? "font-semibold text-ink" : "text-muted")
-          }
-          style={{ top: `${sizePx / 2 + 9}px` }}
-        >
-          {label}
-        </span>
-      </Html>
+      <SceneLabel text={label} className={emphasis ? "font-semibold text-ink" : "text-muted"} offsetPx={[0, sizePx / 2 + 4]} />
     </group>
   );
 }

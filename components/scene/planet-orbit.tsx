@@ -16,7 +16,7 @@ import { fillScene } from "./scale";
 
 export interface PlanetOrbitProps {
   body: BodyId;
-  /** Ephemeris used to sample the orbit (an uncached one is best: samples span decades). */
+  /** Ephemeris used to sample the orbit (a cheap one is best: samples span decades). */
   ephemeris: Ephemeris;
   /** Start of the sampled period, TDB s past J2000. */
   epoch: number;

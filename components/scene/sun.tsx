@@ -2,8 +2,8 @@
 /** The Sun: a bright disc of constant screen size at the heliocentric origin, labelled. */
 import { useRef } from "react";
 import { useFrame } from "@react-three/fiber";
-import { Html } from "@react-three/drei";
-import type { Mesh } from "three";
+import { SceneLabel } from "./scene-label";
+import type { Group } from "three";
 import { useSceneFrame, worldPerPixel } from "./scene-frame";
 import { toSceneInto } from "./scale";
 import { cssColor } from "./colors";
@@ -17,7 +17,7 @@ const ZERO = [0, 0, 0];
 
 export function Sun({ sizePx = 16 }: SunProps) {
   const frame = useSceneFrame();
-  const ref = useRef<Mesh>(null);
+  const ref = useRef<Group>(null);
   const p = useRef([0, 0, 0]);
   useFrame(({ camera, size }) => {
     const m = ref.current;
@@ -28,12 +28,12 @@ export function Sun({ sizePx = 16 }: SunProps) {
     m.scale.setScalar((worldPerPixel(camera.position.distanceTo(m.position), fov, size.height) * sizePx) / 2);
   });
   return (
-    <mesh ref={ref}>
-      <sphereGeometry args={[1, 24, 16]} />
-      <meshBasicMaterial color={cssColor("--gy-sun", "#f3e3a6")} />
-      <Html center className="pointer-events-none select-none" zIndexRange={[10, 0]}>
-        <span className="relative top-4 text-[11px] font-medium text-muted">Sun</span>
-      </Html>
-    </mesh>
+    <group ref={ref}>
+      <mesh>
+        <sphereGeometry args={[1, 24, 16]} />
+        <meshBasicMaterial color={cssColor("--gy-sun", "#f3e3a6")} />
+      </mesh>
+      <SceneLabel text="Sun" className="text-muted" offsetPx={[0, sizePx / 2 + 4]} />
+    </group>
   );
 }
