@@ -16,6 +16,8 @@ import type { TourResult, TourSpec } from "@/lib/astro/types";
 import type { StoredTour } from "@/lib/validation/tour";
 
 const DEG = 180 / Math.PI;
+/** Rounded to 1e-9° so server and browser render the same text (their atan2 may differ in the last bit). */
+const roundDeg = (x: number) => Math.round(x * 1e9) / 1e9;
 
 export interface EncounterCardProps {
   tourId: number;
@@ -104,7 +106,7 @@ export function EncounterCard({ tourId, tour, spec, result, selectedNodeId, clas
         <Row label="Powered Δv"><Num value={f?.dv} unit="km/s" digits={3} /></Row>
         <Row label="B·T"><Num value={f?.bT} unit="km" digits={0} /></Row>
         <Row label="B·R"><Num value={f?.bR} unit="km" digits={0} /></Row>
-        <Row label="θ"><Num value={f ? Math.atan2(f.bR, f.bT) * DEG : null} unit="°" digits={2} /></Row>
+        <Row label="θ"><Num value={f ? roundDeg(Math.atan2(f.bR, f.bT) * DEG) : null} unit="°" digits={2} /></Row>
       </>
     );
     if (flag) {
