@@ -61,8 +61,8 @@ test.describe("Compare", () => {
     await page.getByRole("link", { name: /Compare \(2\)/ }).click();
     await expect(page).toHaveURL(/\/compare\?ids=\d+,\d+$/);
     const table = page.getByRole("table", { name: "Tour metrics side by side" });
-    await expect(table.getByRole("link", { name: a })).toBeVisible();
-    await expect(table.getByRole("link", { name: b })).toBeVisible();
+    await expect(table.getByRole("link", { name: a, exact: true })).toBeVisible();
+    await expect(table.getByRole("link", { name: b, exact: true })).toBeVisible();
     await expect(page.getByTestId("caution-banner")).toBeVisible();
     await expect(table.locator('[data-metric="c3"] [data-best="true"]')).toHaveCount(1);
     await expect(page.getByRole("img", { name: /Δv budget per tour/ })).toBeVisible();
