@@ -509,7 +509,6 @@ export function asFast(eph: Ephemeris): FastEphemeris {
 
 /** Nodes per lazily allocated block of a body table. */
 const BLOCK_NODES = 64;
-const BLOCK_LEN = (BLOCK_NODES + 1) * 6; // nodes 0 … BLOCK_NODES (the last duplicates the next block's first)
 
 /**
  * Default cache steps per body, seconds: Mercury 2 h; Venus, Earth, Mars 12 h; Jupiter and beyond 2 d.
@@ -530,9 +529,25 @@ export const DEFAULT_CACHE_STEP_S: Readonly<Record<PlanetId, number>> = {
 /** Fallback step for a custom body of a foreign base ephemeris, s (1 h: safe down to ~0.1 AU perihelia). */
 const FOREIGN_CUSTOM_STEP_S = 3600;
 
+/**
+ * astronomy-engine integrates Pluto and serves it by blending two constant-acceleration
+ * extrapolations over fixed 146-day intervals starting at TT −730000 d (a multiple of 146 d):
+ * within each interval its position is a cubic (plus the smooth solar offset) and its velocity a
+ * quadratic, but the position is only C0 at the interval ends and the velocity is not the
+ * derivative of the position (≈ 2e-4 km/s apart). A Hermite table would be ~4 km off there, so
+ * Pluto is tabulated with nodes aligned on these intervals and interpolated with 4-point
+ * Lagrange cubics kept inside one interval, positions and velocities separately.
+ * Source: astronomy-engine 2.1 source (CalcPluto, PLUTO_DT = 146 d).
+ */
+const PLUTO_INTERVAL_S = 146 * DAY_S;
+
 class BodyTable {
   readonly h: number;
   readonly invH: number;
+  /** Nodes per block (block b holds nodes b·n … b·n + n, the last shared with the next block). */
+  readonly blockNodes: number;
+  /** 4-point Lagrange inside blocks (Pluto) instead of cubic Hermite. */
+  readonly lagrange: boolean;
   readonly blocks = new Map<number, Float64Array>();
   lastIndex = Number.NaN;
   lastBlock: Float64Array = new Float64Array(0);
@@ -542,8 +557,17 @@ class BodyTable {
     readonly body: BodyId,
     step: number,
   ) {
-    this.h = step;
-    this.invH = 1 / step;
+    if (body === "pluto") {
+      const n = Math.max(3, Math.round(PLUTO_INTERVAL_S / step));
+      this.h = PLUTO_INTERVAL_S / n;
+      this.blockNodes = n;
+      this.lagrange = true;
+    } else {
+      this.h = step;
+      this.blockNodes = BLOCK_NODES;
+      this.lagrange = false;
+    }
+    this.invH = 1 / this.h;
   }
 }
 
@@ -558,7 +582,7 @@ export interface CacheInfo {
   body: BodyId;
   /** Node spacing, s. */
   step: number;
-  /** Allocated blocks (each of 65 nodes × 6 float64). */
+  /** Allocated blocks (each of 65 nodes × 6 float64; Pluto: one block per 146-day interval). */
   blocks: number;
   /** Nodes computed from the base ephemeris. */
   nodes: number;
@@ -614,7 +638,7 @@ export function cachedEphemeris(base: Ephemeris, opts?: CachedEphemerisOptions):
   const blockOf = (tab: BodyTable, b: number): Float64Array => {
     let blk = tab.blocks.get(b);
     if (blk === undefined) {
-      blk = new Float64Array(BLOCK_LEN).fill(Number.NaN);
+      blk = new Float64Array((tab.blockNodes + 1) * 6).fill(Number.NaN);
       tab.blocks.set(b, blk);
     }
     tab.lastIndex = b;
@@ -622,25 +646,51 @@ export function cachedEphemeris(base: Ephemeris, opts?: CachedEphemerisOptions):
     return blk;
   };
 
+  const node = (tab: BodyTable, blk: Float64Array, b: number, i: number): void => {
+    const j = i * 6;
+    if (blk[j] !== blk[j]) {
+      fast.stateInto(tab.body, (b * tab.blockNodes + i) * tab.h, blk, j);
+      tab.filled++;
+    }
+  };
+
   const interp = (tab: BodyTable, t: number, out: Float64Array, o: number): void => {
     const h = tab.h;
+    const n = tab.blockNodes;
     const k = Math.floor(t * tab.invH);
-    const b = Math.floor(k / BLOCK_NODES);
+    const b = Math.floor(k / n);
     const blk = b === tab.lastIndex ? tab.lastBlock : blockOf(tab, b);
-    const i0 = (k - b * BLOCK_NODES) * 6;
+    const i = k - b * n;
+    if (tab.lagrange) {
+      // 4-point Lagrange on nodes j … j+3 of this block, x = (t − t_j)/h ∈ [0, 3]
+      const j = i < 1 ? 0 : i > n - 3 ? n - 3 : i - 1;
+      for (let q = 0; q < 4; q++) node(tab, blk, b, j + q);
+      const x = (t - (b * n + j) * h) * tab.invH;
+      const x1 = x - 1;
+      const x2 = x - 2;
+      const x3 = x - 3;
+      const w0 = (-x1 * x2 * x3) / 6;
+      const w1 = (x * x2 * x3) / 2;
+      const w2 = (-x * x1 * x3) / 2;
+      const w3 = (x * x1 * x2) / 6;
+      const j0 = j * 6;
+      for (let c = 0; c < 6; c++) {
+        out[o + c] =
+          w0 * (blk[j0 + c] as number) +
+          w1 * (blk[j0 + 6 + c] as number) +
+          w2 * (blk[j0 + 12 + c] as number) +
+          w3 * (blk[j0 + 18 + c] as number);
+      }
+      return;
+    }
+    const i0 = i * 6;
     const i1 = i0 + 6;
-    if (blk[i0] !== blk[i0]) {
-      fast.stateInto(tab.body, k * h, blk, i0);
-      tab.filled++;
-    }
-    if (blk[i1] !== blk[i1]) {
-      fast.stateInto(tab.body, (k + 1) * h, blk, i1);
-      tab.filled++;
-    }
+    if (blk[i0] !== blk[i0]) node(tab, blk, b, i);
+    if (blk[i1] !== blk[i1]) node(tab, blk, b, i + 1);
     const s = (t - k * h) * tab.invH;
     const s2 = s * s;
     const s3 = s2 * s;
-    // Hermite basis and derivatives
+    // Hermite basis (h10, h11 scaled by h) and their time derivatives
     const h00 = 2 * s3 - 3 * s2 + 1;
     const h10 = (s3 - 2 * s2 + s) * h;
     const h01 = -2 * s3 + 3 * s2;
