@@ -8,7 +8,7 @@
  * (IAU 2006 precession, Capitaine et al. 2003), exactly as its `Rotation_EQJ_ECL` matrix.
  * astronomy-engine may be imported only here and in ephemeris.ts.
  */
-import { AstroTime, Body, RotationAxis } from "astronomy-engine";
+import { AstroTime, Body, RotationAxis, Rotation_EQJ_ECL } from "astronomy-engine";
 import { OBLIQUITY_J2000 } from "./constants";
 import type { PlanetId, Vec3, Vec3Like } from "./types";
 
@@ -21,13 +21,18 @@ export const WORKING_FRAME: FrameId = "EclJ2000";
 /** All frame ids known to lib/astro. */
 export const FRAME_IDS: readonly FrameId[] = ["EclJ2000", "EqJ2000"] as const;
 
+const AE_EQJ_ECL = Rotation_EQJ_ECL().rot;
+
 /**
- * cos and sin of the J2000 obliquity ε = 84381.406″ (dimensionless).
- * Source: IAU 2006 precession (Capitaine et al. 2003), the value astronomy-engine's Rotation_EQJ_ECL uses.
+ * cos ε of the J2000 obliquity ε = 84381.406″ (dimensionless), taken from astronomy-engine's
+ * Rotation_EQJ_ECL matrix itself so that our ecliptic is bit-for-bit its ecliptic (its hard-coded
+ * ε = 0.40909260059599012 rad differs from 84381.406″ by 5e-12 rad, 0.02 km at Pluto's distance;
+ * OBLIQUITY_J2000 in constants.ts is the published value).
+ * Source: IAU 2006 precession (Capitaine et al. 2003) via astronomy-engine's Rotation_EQJ_ECL.
  */
-export const COS_OBLIQUITY = Math.cos(OBLIQUITY_J2000);
-/** sin ε, ε = 84381.406″ (see COS_OBLIQUITY). */
-export const SIN_OBLIQUITY = Math.sin(OBLIQUITY_J2000);
+export const COS_OBLIQUITY: number = AE_EQJ_ECL[1]?.[1] ?? Math.cos(OBLIQUITY_J2000);
+/** sin ε, ε = 84381.406″ (see COS_OBLIQUITY); from astronomy-engine's Rotation_EQJ_ECL. */
+export const SIN_OBLIQUITY: number = AE_EQJ_ECL[2]?.[1] ?? Math.sin(OBLIQUITY_J2000);
 
 function checkVec(name: string, v: unknown): asserts v is Vec3Like {
   if (v == null || typeof v !== "object" || typeof (v as { length?: unknown }).length !== "number") {
