@@ -399,6 +399,7 @@ function planetElementsAt(body: PlanetId, t: number): PlanetElementsNow {
  * Osculating-style elements of a planet from the JPL approximate table at epoch t
  * (a km, e, i rad, raan rad, argp rad, nu rad true anomaly), EclJ2000; t = TDB s past J2000.
  * Valid 1800–2050 (computed outside, accuracy not guaranteed). `earth` is the EM barycentre.
+ * i is returned in [0, π] (a negative table I is folded into Ω + π, ω + π).
  * Useful to draw planet orbits. Source: JPL SSD approximate elements, Table 1 (from memory).
  * @throws RangeError for a non-planet id or non-finite t.
  */
@@ -409,6 +410,10 @@ export function planetMeanElements(body: PlanetId, t: number): OrbitalElements {
   const E = solveKeplerEllipse(el.M, el.e);
   const nu = 2 * Math.atan2(Math.sqrt(1 + el.e) * Math.sin(E / 2), Math.sqrt(1 - el.e) * Math.cos(E / 2));
   const wrap = (x: number) => x - TWO_PI * Math.floor(x / TWO_PI);
+  // The EM-barycentre row has I < 0 near J2000: (−I, Ω, ω) is the same orbit as (I, Ω + π, ω + π).
+  if (el.inc < 0) {
+    return { a: el.a, e: el.e, i: -el.inc, raan: wrap(el.raan + Math.PI), argp: wrap(el.argp + Math.PI), nu: wrap(nu) };
+  }
   return { a: el.a, e: el.e, i: el.inc, raan: wrap(el.raan), argp: wrap(el.argp), nu: wrap(nu) };
 }
 
