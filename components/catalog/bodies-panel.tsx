@@ -60,7 +60,7 @@ export function BodiesPanel({ initial, canEdit }: BodiesPanelProps) {
       />
       {canEdit && mode.kind === "upload" ? (
         <CardBody className="border-b border-line bg-sunken/40">
-          <BodiesUpload onImported={(n) => { setNotice({ tone: "ok", text: `Imported ${n} bod${n === 1 ? "y" : "ies"}.` }); void mutate(); }} />
+          <BodiesUpload onImported={() => { setNotice(null); void mutate(); }} />
         </CardBody>
       ) : null}
       {canEdit && (mode.kind === "add" || mode.kind === "edit") ? (
@@ -126,12 +126,12 @@ export function BodiesPanel({ initial, canEdit }: BodiesPanelProps) {
                   <td className="px-3 py-2 text-right align-top"><Num value={b.input.argpDeg} unit="°" digits={2} /></td>
                   <td className="px-3 py-2 text-right align-top">
                     <Num value={b.input.mDeg} unit="°" digits={2} title="Mean anomaly at epoch" />
-                    <div className="text-xs text-muted" title="True anomaly at epoch">ν <Num value={b.nuDeg} unit="°" digits={2} /></div>
+                    <div className="text-xs whitespace-nowrap text-muted" title="True anomaly at epoch">ν <Num value={b.nuDeg} unit="°" digits={2} /></div>
                   </td>
                   <td className="px-3 py-2 text-right align-top"><Num value={b.input.muKm3S2} unit="km³/s²" digits={3} /></td>
                   <td className="px-3 py-2 text-right align-top">
                     <Num value={b.input.radiusKm} unit="km" digits={1} />
-                    <div className="text-xs text-muted">min alt <Num value={b.input.minAltKm} unit="km" digits={0} /></div>
+                    <div className="text-xs whitespace-nowrap text-muted">min alt <Num value={b.input.minAltKm} unit="km" digits={0} /></div>
                   </td>
                   <td className="px-3 py-2 align-top text-xs">
                     {b.usedBy.length === 0 ? (

@@ -75,9 +75,12 @@ export function BodyForm({ body, onDone, onCancel }: BodyFormProps) {
       minAltKm: n(vals.minAltKm),
     };
     const r = v.safeParse(bodyInputSchema, input);
-    if (!r.success) {
+    const aMissing = vals.a.trim() === "";
+    if (!r.success || aMissing) {
       const next: Partial<Record<Key, string>> = {};
-      for (const i of r.issues) {
+      if (aMissing) next.a = `a is required (${aUnit === "au" ? "AU" : "km"})`;
+      const issues = r.success ? [] : r.issues;
+      for (const i of issues) {
         const p = v.getDotPath(i);
         const k = p ? (FIELD_OF_PATH[p] ?? (p as Key)) : null;
         if (k && !next[k]) next[k] = i.message;
@@ -87,6 +90,7 @@ export function BodyForm({ body, onDone, onCancel }: BodyFormProps) {
       return;
     }
     setErrors({});
+    if (!r.success) return;
     setPending(true);
     try {
       const saved = body
