@@ -37,6 +37,7 @@ export function ToursTable({ initial, canCreate }: ToursTableProps) {
   const [q, setQ] = useState("");
   const [body, setBody] = useState("");
   const [dvMax, setDvMax] = useState("");
+  const [c3Max, setC3Max] = useState("");
   const [sort, setSort] = useState<SortKey>("updated");
   const [dir, setDir] = useState<"asc" | "desc">("desc");
   const [selected, setSelected] = useState<number[]>([]);
@@ -47,10 +48,11 @@ export function ToursTable({ initial, canCreate }: ToursTableProps) {
     if (q.trim()) p.set("q", q.trim());
     if (body) p.set("body", body);
     if (/^\d+(\.\d+)?$/.test(dvMax)) p.set("dvMax", dvMax);
+    if (/^\d+(\.\d+)?$/.test(c3Max)) p.set("c3Max", c3Max);
     p.set("sort", sort);
     p.set("dir", dir);
     return `/api/tours?${p.toString()}`;
-  }, [status, q, body, dvMax, sort, dir]);
+  }, [status, q, body, dvMax, c3Max, sort, dir]);
   const isDefault = url === "/api/tours?sort=updated&dir=desc";
   const { data, error, isLoading } = useSWR<{ items: TourListItem[]; total: number }>(url, fetcher, {
     fallbackData: isDefault ? initial : undefined,
@@ -68,7 +70,7 @@ export function ToursTable({ initial, canCreate }: ToursTableProps) {
     setSelected((s) => (s.includes(id) ? s.filter((x) => x !== id) : s.length >= 6 ? s : [...s, id]));
 
   const items = data?.items ?? [];
-  const filtered = Boolean(status || q || body || dvMax);
+  const filtered = Boolean(status || q || body || dvMax || c3Max);
 
   return (
     <div className="space-y-4">
@@ -102,6 +104,11 @@ export function ToursTable({ initial, canCreate }: ToursTableProps) {
         <label className="flex flex-col gap-1 text-xs text-muted">
           Total Δv at most (km/s)
           <input value={dvMax} onChange={(e) => setDvMax(e.target.value)} inputMode="decimal" placeholder="any" aria-label="Maximum total Δv"
+            className="num h-9 w-28 rounded-md border border-line bg-sunken px-3 text-sm text-ink outline-none focus:border-accent" />
+        </label>
+        <label className="flex flex-col gap-1 text-xs text-muted">
+          Launch C3 at most (km²/s²)
+          <input value={c3Max} onChange={(e) => setC3Max(e.target.value)} inputMode="decimal" placeholder="any" aria-label="Maximum launch C3"
             className="num h-9 w-28 rounded-md border border-line bg-sunken px-3 text-sm text-ink outline-none focus:border-accent" />
         </label>
         <div className="ml-auto flex items-center gap-2">
