@@ -232,6 +232,12 @@ export function AimBoard(props: AimBoardProps) {
     if (raf.current !== null) cancelAnimationFrame(raf.current);
   }, []);
 
+  const moveTo = (bT: number, bR: number, dirtyAfter: boolean) => {
+    setAim({ bT, bR });
+    compute(bT, bR);
+    setDirty(dirtyAfter);
+  };
+
   const changePole = (next: AimPole) => {
     if (!setup.ok || next === pole) return;
     const from = setup.ctx[pole];
@@ -331,9 +337,9 @@ export function AimBoard(props: AimBoardProps) {
     const lines = [
       `B·T ${formatNum(current.bT, 1)} km   B·R ${formatNum(current.bR, 1)} km   |B| ${formatNum(Math.hypot(current.bT, current.bR), 1)} km   pole ${pole}`,
       r ? `rp ${formatNum(r.rp, 1)} km   altitude ${formatNum(r.altitude, 1)} km   turn ${formatNum((r.turnAngle * 180) / Math.PI, 3)}°   v∞ out ${formatNum(r.vinfOutMag, 3)} km/s` : "",
-      r ? `closest approach to ${bodyLabel(ctx?.next.body ?? "")} ${formatNum(r.closest.distance, 0)} km on ${dateTimeOf(r.closest.epoch)} UTC` : "",
-      `σ(B·T) ${formatNum(dispersion.sigmaT, 1)} km   σ(B·R) ${formatNum(dispersion.sigmaR, 1)} km   ρ ${formatNum(dispersion.rho, 2)}` +
-        (risk ? `   P(below min altitude) ${formatProbability(risk.pBelowMin)}   P(impact) ${formatProbability(risk.pImpact)}` : ""),
+      r ? `closest approach to ${bodyLabel(ctx?.next.body ?? "")} ${formatNum(r.closest.distance, 0)} km on ${dateTimeOf(r.closest.epoch)} UTC; miss at the planned epoch ${formatNum(r.missAtPlanned, 0)} km` : "",
+      `σ(B·T) ${formatNum(dispersion.sigmaT, 1)} km   σ(B·R) ${formatNum(dispersion.sigmaR, 1)} km   ρ ${formatNum(dispersion.rho, 2)}`,
+      risk ? `P(below min altitude) ${formatProbability(risk.pBelowMin)}   P(impact) ${formatProbability(risk.pImpact)}` : "",
       "Preliminary patched-conic design - not for operations.",
     ].filter(Boolean);
     try {
@@ -350,6 +356,26 @@ export function AimBoard(props: AimBoardProps) {
   };
 
   // ---- the small Orrery ----
+  // The outgoing arc reaches the 3D scene at most every 120 ms while dragging (a WebGL frame is
+  // much dearer than the B-plane readouts, above all with software rendering).
+  const [orreryArc, setOrreryArc] = useState<Float64Array | undefined>(undefined);
+  const arcTimer = useRef<ReturnType<typeof setTimeout> | null>(null);
+  const arcLatest = useRef<Float64Array | undefined>(undefined);
+  arcLatest.current = readout?.arc;
+  useEffect(() => {
+    if (arcTimer.current !== null) return;
+    arcTimer.current = setTimeout(() => {
+      arcTimer.current = null;
+      setOrreryArc(arcLatest.current);
+    }, 120);
+  }, [readout?.arc]);
+  useEffect(
+    () => () => {
+      if (arcTimer.current !== null) clearTimeout(arcTimer.current);
+      arcTimer.current = null;
+    },
+    [],
+  );
   const orreryTours = useMemo(
     () =>
       setup.ok
@@ -363,12 +389,19 @@ export function AimBoard(props: AimBoardProps) {
                 epoch: n.epoch,
                 label: `${i === 0 ? "Launch" : i === stored.nodes.length - 1 ? "Arrival" : "Flyby"} · ${bodyLabel(n.body)} · ${dateOf(n.epoch)}`,
               })),
-              perturbed: readout?.arc,
+              perturbed: orreryArc,
               primary: true,
             },
           ]
         : [],
-    [setup, tourId, name, stored.nodes, readout?.arc],
+    [setup, tourId, name, stored.nodes, orreryArc],
+  );
+
+  // The same element between arc updates: React skips re-rendering the scene on every drag frame.
+  const ephSpec = setup.ok ? setup.ephSpec : null;
+  const orreryElement = useMemo(
+    () => (ephSpec ? <Orrery tours={orreryTours} ephemeris={ephSpec} selectedNode={nodeIndex} className="h-[380px]" /> : null),
+    [orreryTours, ephSpec, nodeIndex],
   );
 
   const phys = isPlanetId(node.body) ? BODIES[node.body] : undefined;
@@ -388,7 +421,9 @@ export function AimBoard(props: AimBoardProps) {
           </>
         }
         title={`Aim board · ${bodyLabel(node.body)} flyby`}
-        description={`Node ${nodeIndex + 1} of ${stored.nodes.length}, ${dateTimeOf(node.epoch)} UTC. Drag your aim point in the B-plane and watch where the outgoing leg goes.`}
+        description={`Node ${nodeIndex + 1} of ${stored.nodes.length}, ${dateTimeOf(node.epoch)} UTC. ${
+          canEdit ? "Drag your aim point in the B-plane and watch where the outgoing leg goes." : "The aim point in the B-plane and where the outgoing leg goes."
+        }`}
         actions={
           <>
             <LinkButton href={`/tours/${tourId}`} variant="ghost" size="sm">
@@ -479,6 +514,7 @@ export function AimBoard(props: AimBoardProps) {
                   minAltitude={minAltitude}
                   ellipses={ellipses}
                   editable={canEdit}
+                  aimLabel={canEdit ? "your aim" : saved ? "saved aim" : "aim"}
                   colors={colors}
                   onAim={onAim}
                 />
@@ -488,26 +524,32 @@ export function AimBoard(props: AimBoardProps) {
               </div>
               <div className="flex flex-wrap items-center gap-2 border-t border-line px-4 py-3 text-sm">
                 <span className="text-xs uppercase tracking-wide text-faint">Pole</span>
-                <Button size="sm" variant={pole === "ecliptic" ? "secondary" : "ghost"} aria-pressed={pole === "ecliptic"} onClick={() => changePole("ecliptic")} disabled={!canEdit}>
-                  Ecliptic
-                </Button>
-                <Button
-                  size="sm"
-                  variant={pole === "spin" ? "secondary" : "ghost"}
-                  aria-pressed={pole === "spin"}
-                  onClick={() => changePole("spin")}
-                  disabled={!canEdit || !setup.ctx.spin}
-                >
-                  Spin axis
-                </Button>
+                {!canEdit ? <span className="text-sm text-muted">{pole === "ecliptic" ? "ecliptic north" : "spin axis"}</span> : null}
                 {canEdit ? (
                   <>
+                    <Button
+                      size="sm"
+                      variant={pole === "ecliptic" ? "secondary" : "ghost"}
+                      aria-pressed={pole === "ecliptic"}
+                      onClick={() => changePole("ecliptic")}
+                    >
+                      Ecliptic
+                    </Button>
+                    <Button
+                      size="sm"
+                      variant={pole === "spin" ? "secondary" : "ghost"}
+                      aria-pressed={pole === "spin"}
+                      onClick={() => changePole("spin")}
+                      disabled={!setup.ctx.spin}
+                    >
+                      Spin axis
+                    </Button>
                     <span className="mx-1 h-4 w-px bg-line" />
-                    <Button size="sm" variant="ghost" data-testid="aim-reset-needed" onClick={() => { setAim({ bT: ctx.planned.bT, bR: ctx.planned.bR }); compute(ctx.planned.bT, ctx.planned.bR); setDirty(true); }}>
+                    <Button size="sm" variant="ghost" data-testid="aim-reset-needed" onClick={() => moveTo(ctx.planned.bT, ctx.planned.bR, true)}>
                       Back to the needed point
                     </Button>
                     {saved ? (
-                      <Button size="sm" variant="ghost" onClick={() => { setAim({ bT: saved.bT, bR: saved.bR }); compute(saved.bT, saved.bR); setDirty(false); }}>
+                      <Button size="sm" variant="ghost" onClick={() => moveTo(saved.bT, saved.bR, false)}>
                         Back to the saved point
                       </Button>
                     ) : null}
@@ -528,6 +570,7 @@ export function AimBoard(props: AimBoardProps) {
                   vinfIn={ctx.vinfInMag}
                   nextLabel={nextLabel}
                   nextEpoch={ctx.next.epoch}
+                  aimTitle={canEdit ? "your aim" : "aim point"}
                 />
               </CardBody>
             </Card>
@@ -553,7 +596,7 @@ export function AimBoard(props: AimBoardProps) {
             <Card>
               <CardHeader title="Orrery" description="The planned arcs (solid) and the outgoing arc from your aim point (dashed)." />
               <div className="p-3">
-                <Orrery tours={orreryTours} ephemeris={setup.ephSpec} selectedNode={nodeIndex} className="h-[380px]" />
+                {orreryElement}
               </div>
             </Card>
           </div>

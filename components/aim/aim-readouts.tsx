@@ -13,6 +13,8 @@ export interface AimReadoutsProps {
   vinfIn: number;
   nextLabel: string;
   nextEpoch: number;
+  /** Column title of the aim point (default "your aim"). */
+  aimTitle?: string;
 }
 
 const DEG = 180 / Math.PI;
@@ -31,7 +33,7 @@ function Row({ label, children, planned, testId }: { label: string; children: Re
   );
 }
 
-export function AimReadouts({ readout: r, planned, radius, rpMin, vinfIn, nextLabel, nextEpoch }: AimReadoutsProps) {
+export function AimReadouts({ readout: r, planned, radius, rpMin, vinfIn, nextLabel, nextEpoch, aimTitle = "your aim" }: AimReadoutsProps) {
   const altLevel = !r ? null : r.impact || r.belowMin ? "violated" : r.rp - rpMin < 0.1 * (rpMin - radius) + 50 ? "margin" : "ok";
   return (
     <div className="space-y-3">
@@ -39,7 +41,7 @@ export function AimReadouts({ readout: r, planned, radius, rpMin, vinfIn, nextLa
         <thead>
           <tr className="text-[11px] uppercase tracking-wide text-faint">
             <th className="pb-1 text-left font-normal">quantity</th>
-            <th className="pb-1 text-right font-normal">your aim</th>
+            <th className="pb-1 text-right font-normal">{aimTitle}</th>
             <th className="pb-1 pl-3 text-right font-normal">needed</th>
           </tr>
         </thead>

@@ -34,6 +34,8 @@ export interface BPlanePlotProps {
   /** kσ ellipses around the aim point, km and rad (from +T toward +R). */
   ellipses: { k: number; major: number; minor: number; angle: number }[];
   editable: boolean;
+  /** Label of the aim point (default "your aim"). */
+  aimLabel?: string;
   colors: PlotColors;
   onAim?(bT: number, bR: number): void;
   /** Called when a drag starts / ends (for the parent's state). */
@@ -44,7 +46,7 @@ export interface BPlanePlotProps {
 const MARGIN = 46;
 
 export const BPlanePlot = forwardRef<SVGSVGElement, BPlanePlotProps>(function BPlanePlot(
-  { extent, aim, planned, impactRadius, minAltRadius, minAltitude, ellipses, editable, colors, onAim, onDragState, size = 560 },
+  { extent, aim, planned, impactRadius, minAltRadius, minAltitude, ellipses, editable, aimLabel = "your aim", colors, onAim, onDragState, size = 560 },
   ref,
 ) {
   const W = size;
@@ -65,12 +67,15 @@ export const BPlanePlot = forwardRef<SVGSVGElement, BPlanePlotProps>(function BP
     [ref],
   );
 
+  // The aim point stays inside the drawn area (it can always be seen and grabbed again).
+  const lim = extent * 1.08;
+  const clamp = (v: number) => Math.max(-lim, Math.min(lim, v));
   const toKm = (e: PointerEvent<SVGElement>): { bT: number; bR: number } | null => {
     const svg = svgRef.current;
     const m = svg?.getScreenCTM();
     if (!svg || !m) return null;
     const p = new DOMPoint(e.clientX, e.clientY).matrixTransform(m.inverse());
-    return { bT: (p.x - c) / s, bR: (p.y - c) / s };
+    return { bT: clamp((p.x - c) / s), bR: clamp((p.y - c) / s) };
   };
 
   const onDown = (e: PointerEvent<SVGSVGElement>) => {
@@ -106,7 +111,7 @@ export const BPlanePlot = forwardRef<SVGSVGElement, BPlanePlotProps>(function BP
     else if (e.key === "ArrowUp") dR = -step;
     else return;
     e.preventDefault();
-    onAim?.(aim.bT + dT, aim.bR + dR);
+    onAim?.(clamp(aim.bT + dT), clamp(aim.bR + dR));
   };
 
   const font = "ui-monospace, SFMono-Regular, Menlo, monospace";
@@ -219,7 +224,7 @@ export const BPlanePlot = forwardRef<SVGSVGElement, BPlanePlotProps>(function BP
         data-testid="aim-handle"
         tabIndex={editable ? 0 : -1}
         role={editable ? "button" : undefined}
-        aria-label={`Your aim point: B·T ${formatNum(aim.bT, 0)} km, B·R ${formatNum(aim.bR, 0)} km.${editable ? " Drag it, or use the arrow keys (Shift for larger steps)." : ""}`}
+        aria-label={`${aimLabel}: B·T ${formatNum(aim.bT, 0)} km, B·R ${formatNum(aim.bR, 0)} km.${editable ? " Drag it, or use the arrow keys (Shift for larger steps)." : ""}`}
         onKeyDown={onKey}
         className={editable ? "cursor-grab outline-none focus-visible:[&>circle:first-child]:stroke-[3]" : "outline-none"}
       >
@@ -228,7 +233,7 @@ export const BPlanePlot = forwardRef<SVGSVGElement, BPlanePlotProps>(function BP
       </g>
       {inView(ax, ay) ? (
         <text x={ax + 14} y={ay - 12} fill={colors.accent} fontSize="11" fontWeight="600" fontFamily={font}>
-          your aim
+          {aimLabel}
         </text>
       ) : null}
     </svg>

@@ -30,11 +30,13 @@ export function FocusRig({ focus, mode }: FocusRigProps) {
   const frame = useSceneFrame();
   const camera = useThree((s) => s.camera);
   const controls = useThree((s) => s.controls) as unknown as ControlsLike | null;
+  const invalidate = useThree((s) => s.invalidate);
   const scratch = useRef({ km: new Float64Array(3), scene: [0, 0, 0], offset: new Vector3(), reset: true });
 
   useEffect(() => {
     scratch.current.reset = true;
-  }, [focus, mode]);
+    invalidate();
+  }, [focus, mode, controls, invalidate]);
 
   useFrame(() => {
     const s = scratch.current;

@@ -7,9 +7,13 @@
  * perturbed outgoing arc (dashed), orbit camera controls, a focus picker (Sun / each node body)
  * and a log/linear distance scale. km become scene units only in ./scale.ts; positions are rebased
  * near the focus (./focus-rig.tsx) to keep float32 precision.
+ * Frames are drawn on demand (replay clock changes, camera moves, new data), not continuously:
+ * software WebGL (headless, remote desktops) would otherwise spend the main thread redrawing an
+ * unchanged scene.
  */
 import { useMemo, useState } from "react";
 import { Canvas } from "@react-three/fiber";
+import { RedrawOnReplay } from "./redraw-on-replay";
 import { OrbitControls } from "@react-three/drei";
 import { ephemerisFromSpec, meanElementsEphemeris } from "@/lib/astro/ephemeris";
 import { PLANET_IDS } from "@/lib/astro/constants";
@@ -134,12 +138,14 @@ export function Orrery({ tours, ephemeris, focus, onFocusChange, selectedNode = 
       ) : (
         <Canvas
           gl={{ preserveDrawingBuffer: true, antialias: true }}
+          frameloop="demand"
           dpr={[1, 2]}
           camera={{ fov: 45, near: 0.0005, far: 5000, up: [0, 0, 1], position: [0, -30, 26] }}
           fallback={<p className="p-4 text-sm text-muted">This browser cannot draw the 3D scene (WebGL is unavailable).</p>}
           className="!absolute inset-0"
         >
           <color attach="background" args={[background]} />
+          <RedrawOnReplay />
           <SceneFrameContext.Provider value={frame}>
             <FocusRig focus={currentFocus} mode={mode} />
             <Sun />

@@ -6,7 +6,7 @@
  * when the scene's rebase origin or scale mode changes.
  */
 import { useEffect, useMemo, useRef } from "react";
-import { useFrame } from "@react-three/fiber";
+import { useFrame, useThree } from "@react-three/fiber";
 import { BufferAttribute, BufferGeometry, Line, LineBasicMaterial } from "three";
 import { stateToElements } from "@/lib/astro/kepler";
 import { MU_SUN } from "@/lib/astro/constants";
@@ -60,13 +60,15 @@ export function PlanetOrbit({ body, ephemeris, epoch, color, opacity = 0.55, poi
     return l;
   }, [km, color, opacity]);
   const seen = useRef(-1);
+  const invalidate = useThree((s) => s.invalidate);
   useEffect(() => {
     seen.current = -1;
+    invalidate();
     return () => {
       line.geometry.dispose();
       (line.material as LineBasicMaterial).dispose();
     };
-  }, [line]);
+  }, [line, invalidate]);
   useFrame(() => {
     if (seen.current === frame.version || km.length === 0) return;
     const attr = line.geometry.getAttribute("position") as BufferAttribute;

@@ -24,7 +24,7 @@ export function Spacecraft({ samples, color, sizePx = 12, opacity = 1 }: Spacecr
   const frame = useSceneFrame();
   const ref = useRef<Mesh>(null);
   const scratch = useRef({ km: new Float64Array(3), p: [0, 0, 0] });
-  useFrame(({ camera, size }, delta) => {
+  useFrame(({ camera, size }) => {
     const m = ref.current;
     if (!m || samples.epochs.length === 0) return;
     const s = scratch.current;
@@ -33,7 +33,6 @@ export function Spacecraft({ samples, color, sizePx = 12, opacity = 1 }: Spacecr
     m.position.set(s.p[0]!, s.p[1]!, s.p[2]!);
     const fov = (camera as { fov?: number }).fov ?? 50;
     m.scale.setScalar((worldPerPixel(camera.position.distanceTo(m.position), fov, size.height) * sizePx) / 2);
-    m.rotation.z += delta * 0.8;
   });
   return (
     <mesh ref={ref}>

@@ -5,7 +5,7 @@
  * scale changes, or when a new positions array is passed (e.g. while dragging an aim point).
  */
 import { useEffect, useMemo, useRef } from "react";
-import { useFrame } from "@react-three/fiber";
+import { useFrame, useThree } from "@react-three/fiber";
 import { BufferAttribute, BufferGeometry, Line, LineBasicMaterial, LineDashedMaterial } from "three";
 import { useSceneFrame } from "./scene-frame";
 import { toSceneInto } from "./scale";
@@ -23,6 +23,7 @@ export interface TrajectoryLineProps {
 
 export function TrajectoryLine({ positionsKm, from = 0, count, color, opacity = 1, dashed = false }: TrajectoryLineProps) {
   const frame = useSceneFrame();
+  const invalidate = useThree((s) => s.invalidate);
   const n = Math.max(0, Math.min(count ?? positionsKm.length / 3 - from, positionsKm.length / 3 - from));
   const capacity = useRef(0);
   const line = useMemo(() => {
@@ -44,6 +45,8 @@ export function TrajectoryLine({ positionsKm, from = 0, count, color, opacity = 
     },
     [line],
   );
+  // New data: draw a frame (the scene renders on demand).
+  useEffect(() => invalidate(), [invalidate, positionsKm, from, n, line]);
   useFrame(() => {
     const s = seen.current;
     if (s.version === frame.version && s.data === positionsKm && s.from === from && s.n === n) return;
