@@ -9,6 +9,7 @@
  * the next leg needs gives a miss of ~0 km.
  */
 import Link from "next/link";
+import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { ephemerisFromSpec } from "@/lib/astro/ephemeris";
 import { evaluateTour } from "@/lib/astro/tour";
@@ -141,6 +142,7 @@ function plotColors(): PlotColors {
 
 export function AimBoard(props: AimBoardProps) {
   const { tourId, name, status, nodeIndex, canEdit, readOnlyReason, customBodies } = props;
+  const router = useRouter();
   const [stored, setStored] = useState(props.stored);
   const [version, setVersion] = useState(props.version);
   const node = stored.nodes[nodeIndex]!;
@@ -400,8 +402,23 @@ export function AimBoard(props: AimBoardProps) {
   // The same element between arc updates: React skips re-rendering the scene on every drag frame.
   const ephSpec = setup.ok ? setup.ephSpec : null;
   const orreryElement = useMemo(
-    () => (ephSpec ? <Orrery tours={orreryTours} ephemeris={ephSpec} selectedNode={nodeIndex} className="h-[380px]" /> : null),
-    [orreryTours, ephSpec, nodeIndex],
+    () =>
+      ephSpec ? (
+        <Orrery
+          tours={orreryTours}
+          ephemeris={ephSpec}
+          selectedNode={nodeIndex}
+          // A click on another flyby's marker opens that flyby's Aim board.
+          onSelectNode={(_tourId, i) => {
+            const target = stored.nodes[i];
+            if (target && i > 0 && i < stored.nodes.length - 1 && i !== nodeIndex) {
+              router.push(`/tours/${tourId}/aim/${encodeURIComponent(target.id)}`);
+            }
+          }}
+          className="h-[380px]"
+        />
+      ) : null,
+    [orreryTours, ephSpec, nodeIndex, stored.nodes, router, tourId],
   );
 
   const phys = isPlanetId(node.body) ? BODIES[node.body] : undefined;

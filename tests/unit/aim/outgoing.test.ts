@@ -84,3 +84,26 @@ describe("aim drag update", () => {
     expect(() => buildAimContext({ spec, result: broken, nodeIndex: 1, ephemeris: eph })).toThrow(RangeError);
   });
 });
+
+describe("aim context with the spin pole", () => {
+  it("keeps |B| and the needed point's geometry; re-expressing the aim between frames is exact", async () => {
+    const { spinPole } = await import("@/lib/astro/frames");
+    const { reexpressAim } = await import("@/lib/aim/plot");
+    const node = spec.nodes[1]!;
+    const spin = buildAimContext({ spec, result, nodeIndex: 1, ephemeris: eph, pole: "spin", spinPole: spinPole("venus", node.epoch) });
+    const ecl = ctx;
+    // Same incoming asymptote, different T axis: |B|, rp and the turn angle do not depend on the pole.
+    expect(Math.hypot(spin.planned.bT, spin.planned.bR)).toBeCloseTo(Math.hypot(ecl.planned.bT, ecl.planned.bR), 6);
+    expect(spin.planned.rp).toBeCloseTo(ecl.planned.rp, 6);
+    // Venus's IAU north pole lies a few degrees off ecliptic north (IAU WGCCRE, from memory): the T axes differ.
+    expect(Math.abs(spin.planned.bT - ecl.planned.bT)).toBeGreaterThan(1);
+    const moved = reexpressAim(ecl.planned.bT, ecl.planned.bR, ecl, spin);
+    expect(moved.bT).toBeCloseTo(spin.planned.bT, 6);
+    expect(moved.bR).toBeCloseTo(spin.planned.bR, 6);
+    // The same physical aim gives the same outgoing v∞ in either frame.
+    const a = vinfOutForAim(ecl, ecl.planned.bT + 500, ecl.planned.bR - 300).vinfOut;
+    const m2 = reexpressAim(ecl.planned.bT + 500, ecl.planned.bR - 300, ecl, spin);
+    const b = vinfOutForAim(spin, m2.bT, m2.bR).vinfOut;
+    expect(Math.hypot(a[0] - b[0], a[1] - b[1], a[2] - b[2])).toBeLessThan(1e-9);
+  });
+});
