@@ -4,6 +4,7 @@
  * delete a comment.
  */
 import "server-only";
+import "@/lib/db/sequelize"; // initialises the models in this bundle (see lib/db/sequelize.ts)
 import { Comment, User } from "@/models";
 import type { CurrentUser } from "@/lib/auth/dal";
 import { can } from "@/lib/auth/roles";

@@ -4,6 +4,7 @@
  * checks the role and the version, and refuses a baselined tour).
  */
 import "server-only";
+import "@/lib/db/sequelize"; // initialises the models in this bundle (see lib/db/sequelize.ts)
 import { Tour, TourRevision, User } from "@/models";
 import type { CurrentUser } from "@/lib/auth/dal";
 import { can } from "@/lib/auth/roles";
