@@ -5,6 +5,7 @@
  * launch and its feasibility flag. For the launch and the arrival: their own numbers.
  */
 import Link from "next/link";
+import { PinnedComments } from "@/components/comments/comments-panel";
 import type { ReactNode } from "react";
 import { Card, CardHeader } from "@/components/ui/card";
 import { FlagBadge } from "@/components/ui/badge";
@@ -133,6 +134,7 @@ export function EncounterCard({ tourId, tour, spec, result, selectedNodeId, clas
           </Link>
         </div>
       ) : null}
+      <PinnedComments tourId={tourId} nodeId={node.id} className="border-t border-line px-5 py-3" />
     </Card>
   );
 }

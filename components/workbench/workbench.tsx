@@ -29,6 +29,10 @@ import { TimelineStrip } from "./timeline";
 import { ConflictDialog } from "./conflict-dialog";
 import { GLYPHS, Glyph } from "./controls";
 import { OrreryCell } from "./orrery-cell";
+import { FilesCard } from "./files-card";
+import { ReviewPanel } from "@/components/review/review-panel";
+import { TourSubnav } from "@/components/review/tour-subnav";
+import type { Role } from "@/lib/auth/roles";
 
 export interface WorkbenchProps {
   detail: TourDetail;
@@ -38,6 +42,10 @@ export interface WorkbenchProps {
   canEditAim: boolean;
   /** lead/designer: Window scan and Tour search. */
   canSearch: boolean;
+  /** The signed-in user's role (the Review panel offers the transitions it allows). */
+  role: Role;
+  /** The signed-in user owns the tour. */
+  isOwner: boolean;
 }
 
 interface Conflict {
@@ -68,7 +76,7 @@ export function Workbench(props: WorkbenchProps) {
   );
 }
 
-function WorkbenchInner({ detail: initial, canEditChain, canEditAim, canSearch, store }: WorkbenchProps & { store: ReturnType<typeof createWorkbenchStore> }) {
+function WorkbenchInner({ detail: initial, canEditChain, canEditAim, canSearch, role, isOwner, store }: WorkbenchProps & { store: ReturnType<typeof createWorkbenchStore> }) {
   const draft = useStore(store, (s) => s.draft);
   const dirty = useStore(store, (s) => s.dirty);
   const canUndo = useStore(store, (s) => s.past.length > 0);
@@ -257,6 +265,7 @@ function WorkbenchInner({ detail: initial, canEditChain, canEditAim, canSearch, 
           </>
         }
       />
+      <TourSubnav tourId={detail.id} current="workbench" />
       <CautionBanner />
       {readOnlyReason ? (
         <p className="rounded-md border border-line bg-raised px-3 py-2 text-sm text-muted" data-testid="read-only-note">
@@ -297,6 +306,23 @@ function WorkbenchInner({ detail: initial, canEditChain, canEditAim, canSearch, 
           <EncounterCard tourId={detail.id} tour={draft} spec={spec} result={result} selectedNodeId={selectedNodeId} />
           <BudgetCard tour={draft} spec={spec} result={result} pending={computation.pending} error={computation.error} />
           <FlagsCard tour={draft} spec={spec} result={result} onSelectNode={select} />
+          <ReviewPanel
+            tourId={detail.id}
+            status={detail.status}
+            version={baseVersion}
+            role={role}
+            isOwner={isOwner}
+            onChanged={(next) => {
+              // A review transition makes a new version on the server: follow it unless there are unsaved edits
+              // (those then meet the usual 409 dialog when saved).
+              const fresh = next.tour as TourDetail | null;
+              if (fresh && typeof fresh === "object" && "tour" in fresh) {
+                setDetail(fresh);
+                if (!store.getState().dirty) load(fresh.tour, fresh.version);
+              }
+            }}
+          />
+          <FilesCard tourId={detail.id} />
         </div>
       </div>
 

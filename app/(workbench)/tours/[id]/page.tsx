@@ -36,6 +36,8 @@ export default async function WorkbenchPage({ params }: Props) {
       canEditChain={can(user.role, "tour:create") && open}
       canEditAim={can(user.role, "tour:aim") && open}
       canSearch={can(user.role, "tour:create") && open}
+      role={user.role}
+      isOwner={tour.ownerId === user.id}
     />
   );
 }
