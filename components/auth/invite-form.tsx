@@ -6,6 +6,7 @@ import { ApiError, sendJson } from "@/lib/client/fetcher";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { InlineAlert } from "@/components/review/inline-alert";
+import { useMounted } from "@/components/review/use-mounted";
 
 export interface InviteFormProps {
   token: string;
@@ -17,6 +18,7 @@ type Errors = Partial<Record<"name" | "password" | "confirm", string>>;
 /** Accept an invitation: name, password twice. On success the new member is signed in and lands on Tours. */
 export function InviteForm({ token, email }: InviteFormProps) {
   const router = useRouter();
+  const ready = useMounted();
   const [pending, setPending] = useState(false);
   const [errors, setErrors] = useState<Errors>({});
   const [message, setMessage] = useState<string | null>(null);
@@ -53,7 +55,7 @@ export function InviteForm({ token, email }: InviteFormProps) {
   }
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" data-testid="invite-form" data-ready={ready || undefined}>
       <Field label="E-mail" name="email" value={email} readOnly disabled autoComplete="username" />
       <Field label="Name" name="name" autoComplete="name" required autoFocus error={errors.name} maxLength={120} />
       <Field label="Password" name="password" type="password" autoComplete="new-password" required error={errors.password} hint="At least 10 characters." />

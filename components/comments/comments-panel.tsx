@@ -10,6 +10,7 @@ import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { Spinner } from "@/components/ui/spinner";
 import { stamp } from "@/lib/format";
 import { InlineAlert } from "@/components/review/inline-alert";
+import { useMounted } from "@/components/review/use-mounted";
 
 export interface CommentNode {
   /** The stable node id of the tour. */
@@ -65,6 +66,7 @@ function CommentRow({ c, nodeLabel, onDelete, deleting }: { c: CommentItem; node
  */
 export function CommentsPanel({ tourId, nodes, canComment, defaultNodeId = null, className }: CommentsPanelProps) {
   const { data, error, isLoading, mutate } = useSWR<CommentList>(key(tourId), fetcher);
+  const ready = useMounted();
   const [filter, setFilter] = useState<string>("all");
   const [body, setBody] = useState("");
   const [nodeId, setNodeId] = useState<string>(defaultNodeId ?? "");
@@ -116,7 +118,7 @@ export function CommentsPanel({ tourId, nodes, canComment, defaultNodeId = null,
   }
 
   return (
-    <Card className={className} data-testid="comments-panel">
+    <Card className={className} data-testid="comments-panel" data-ready={ready || undefined}>
       <CardHeader
         title="Discussion"
         description={data ? `${data.total} comment${data.total === 1 ? "" : "s"}` : "Comments on the tour and its nodes"}

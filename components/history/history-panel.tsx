@@ -13,6 +13,7 @@ import { EmptyState } from "@/components/ui/empty-state";
 import { days, stamp } from "@/lib/format";
 import { InlineAlert } from "@/components/review/inline-alert";
 import { DiffView } from "./diff-view";
+import { useMounted } from "@/components/review/use-mounted";
 
 export interface HistoryPanelProps {
   tourId: number;
@@ -36,6 +37,7 @@ interface RevisionList {
  */
 export function HistoryPanel({ tourId, canRestore, onRestored, className }: HistoryPanelProps) {
   const router = useRouter();
+  const ready = useMounted();
   const { mutate } = useSWRConfig();
   const listKey = `/api/tours/${tourId}/revisions`;
   const { data, error, isLoading } = useSWR<RevisionList>(listKey, fetcher);
@@ -78,7 +80,7 @@ export function HistoryPanel({ tourId, canRestore, onRestored, className }: Hist
   }
 
   return (
-    <Card className={className} data-testid="history-panel">
+    <Card className={className} data-testid="history-panel" data-ready={ready || undefined}>
       <CardHeader
         title="History"
         description={data ? `${data.total} revision${data.total === 1 ? "" : "s"} · current version ${data.currentVersion}` : "Every saved state of the tour"}

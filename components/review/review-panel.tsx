@@ -11,6 +11,7 @@ import { TextareaField } from "@/components/ui/field";
 import { StatusBadge } from "@/components/ui/badge";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { InlineAlert } from "./inline-alert";
+import { useMounted } from "./use-mounted";
 
 export interface ReviewPanelProps {
   tourId: number;
@@ -46,6 +47,7 @@ const VARIANT: Record<ReviewAction, "primary" | "secondary" | "danger"> = {
  */
 export function ReviewPanel({ tourId, status: initialStatus, version: initialVersion, role, isOwner, onChanged, className }: ReviewPanelProps) {
   const router = useRouter();
+  const ready = useMounted();
   const { mutate } = useSWRConfig();
   const [status, setStatus] = useState(initialStatus);
   const [version, setVersion] = useState(initialVersion);
@@ -97,7 +99,7 @@ export function ReviewPanel({ tourId, status: initialStatus, version: initialVer
   }
 
   return (
-    <Card className={className} data-testid="review-panel">
+    <Card className={className} data-testid="review-panel" data-ready={ready || undefined}>
       <CardHeader
         title="Review"
         description={<>Version <span className="num">{version}</span>{isOwner ? " · you own this tour" : ""}</>}

@@ -12,6 +12,7 @@ import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { Badge, RoleBadge } from "@/components/ui/badge";
 import { stamp } from "@/lib/format";
 import { InlineAlert } from "@/components/review/inline-alert";
+import { useMounted } from "@/components/review/use-mounted";
 
 type List<T> = { items: T[]; total: number };
 
@@ -272,8 +273,9 @@ function AuditTrail({ initial }: { initial: List<AuditItem> }) {
 export function TeamManager({ currentUserId, initialMembers, initialInvitations, initialAudit }: TeamManagerProps) {
   const { mutate } = useSWR<List<AuditItem>>("/api/audit", fetcher, { fallbackData: initialAudit });
   const refreshAudit = () => void mutate();
+  const ready = useMounted();
   return (
-    <div className="space-y-6">
+    <div className="space-y-6" data-testid="team-manager" data-ready={ready || undefined}>
       <Members currentUserId={currentUserId} initial={initialMembers} onChanged={refreshAudit} />
       <Invitations initial={initialInvitations} onChanged={refreshAudit} />
       <AuditTrail initial={initialAudit} />

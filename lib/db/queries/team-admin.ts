@@ -167,9 +167,11 @@ export interface InvitationLookup {
 /** What the invite page shows for a token (no authentication: the token is the secret). */
 export async function lookupInvitation(token: string): Promise<InvitationLookup & { invitation?: Invitation }> {
   if (!TOKEN_RE.test(token)) return { state: "unknown" };
-  const inv = await Invitation.findOne({ where: { tokenHash: hashToken(token) }, include: [{ model: Team, attributes: ["name"] }] });
+  // No `include` here: the association has no alias, and a minified production build can give two
+  // model classes the same name (Sequelize's default alias), which makes the join ambiguous.
+  const inv = await Invitation.findOne({ where: { tokenHash: hashToken(token) } });
   if (!inv) return { state: "unknown" };
-  const team = (inv as unknown as { Team?: Team }).Team;
+  const team = await Team.findByPk(inv.teamId as number, { attributes: ["id", "name"] });
   return { state: stateOf(inv), teamName: team?.name ?? "", email: inv.email, role: inv.role, expiresAt: inv.expiresAt.toISOString(), invitation: inv };
 }
 
