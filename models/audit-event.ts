@@ -22,7 +22,7 @@ export class AuditEvent extends Model<InferAttributes<AuditEvent>, InferCreation
         detail: { type: DataTypes.TEXT, allowNull: true },
         at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
       },
-      { sequelize, tableName: "audit_events", underscored: true, timestamps: false },
+      { sequelize, modelName: "AuditEvent", tableName: "audit_events", underscored: true, timestamps: false },
     );
   }
 }

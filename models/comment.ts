@@ -21,7 +21,7 @@ export class Comment extends Model<InferAttributes<Comment>, InferCreationAttrib
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "comments", underscored: true },
+      { sequelize, modelName: "Comment", tableName: "comments", underscored: true },
     );
   }
 }

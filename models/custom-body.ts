@@ -44,7 +44,7 @@ export class CustomBody extends Model<InferAttributes<CustomBody>, InferCreation
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "custom_bodies", underscored: true },
+      { sequelize, modelName: "CustomBody", tableName: "custom_bodies", underscored: true },
     );
   }
 }

@@ -21,7 +21,7 @@ export class MailMessage extends Model<InferAttributes<MailMessage>, InferCreati
         html: { type: DataTypes.TEXT, allowNull: true },
         sentAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
       },
-      { sequelize, tableName: "mail_messages", underscored: true, timestamps: false },
+      { sequelize, modelName: "MailMessage", tableName: "mail_messages", underscored: true, timestamps: false },
     );
   }
 }

@@ -19,7 +19,7 @@ export class SignInThrottle extends Model<InferAttributes<SignInThrottle>, Infer
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "sign_in_throttles", underscored: true },
+      { sequelize, modelName: "SignInThrottle", tableName: "sign_in_throttles", underscored: true },
     );
   }
 }

@@ -15,7 +15,7 @@ export class Team extends Model<InferAttributes<Team>, InferCreationAttributes<T
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "teams", underscored: true },
+      { sequelize, modelName: "Team", tableName: "teams", underscored: true },
     );
   }
 }

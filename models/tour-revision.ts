@@ -23,7 +23,7 @@ export class TourRevision extends Model<InferAttributes<TourRevision>, InferCrea
         note: { type: DataTypes.STRING(2000), allowNull: true },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "tour_revisions", underscored: true, updatedAt: false },
+      { sequelize, modelName: "TourRevision", tableName: "tour_revisions", underscored: true, updatedAt: false },
     );
   }
 }

@@ -57,7 +57,7 @@ export class Tour extends Model<InferAttributes<Tour>, InferCreationAttributes<T
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: "tours", underscored: true },
+      { sequelize, modelName: "Tour", tableName: "tours", underscored: true },
     );
   }
 }
