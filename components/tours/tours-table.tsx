@@ -36,8 +36,12 @@ export function ToursTable({ initial, canCreate }: ToursTableProps) {
   const [status, setStatus] = useState("");
   const [q, setQ] = useState("");
   const [body, setBody] = useState("");
+  const [dvMin, setDvMin] = useState("");
   const [dvMax, setDvMax] = useState("");
+  const [c3Min, setC3Min] = useState("");
   const [c3Max, setC3Max] = useState("");
+  const [owner, setOwner] = useState("");
+  const { data: members } = useSWR<{ items: { id: number; name: string }[] }>("/api/team/members", fetcher);
   const [sort, setSort] = useState<SortKey>("updated");
   const [dir, setDir] = useState<"asc" | "desc">("desc");
   const [selected, setSelected] = useState<number[]>([]);
@@ -47,12 +51,16 @@ export function ToursTable({ initial, canCreate }: ToursTableProps) {
     if (status) p.set("status", status);
     if (q.trim()) p.set("q", q.trim());
     if (body) p.set("body", body);
-    if (/^\d+(\.\d+)?$/.test(dvMax)) p.set("dvMax", dvMax);
-    if (/^\d+(\.\d+)?$/.test(c3Max)) p.set("c3Max", c3Max);
+    const num = /^\d+(\.\d+)?$/;
+    if (num.test(dvMin)) p.set("dvMin", dvMin);
+    if (num.test(dvMax)) p.set("dvMax", dvMax);
+    if (num.test(c3Min)) p.set("c3Min", c3Min);
+    if (num.test(c3Max)) p.set("c3Max", c3Max);
+    if (owner) p.set("owner", owner);
     p.set("sort", sort);
     p.set("dir", dir);
     return `/api/tours?${p.toString()}`;
-  }, [status, q, body, dvMax, c3Max, sort, dir]);
+  }, [status, q, body, dvMin, dvMax, c3Min, c3Max, owner, sort, dir]);
   const isDefault = url === "/api/tours?sort=updated&dir=desc";
   const { data, error, isLoading } = useSWR<{ items: TourListItem[]; total: number }>(url, fetcher, {
     fallbackData: isDefault ? initial : undefined,
@@ -70,7 +78,7 @@ export function ToursTable({ initial, canCreate }: ToursTableProps) {
     setSelected((s) => (s.includes(id) ? s.filter((x) => x !== id) : s.length >= 6 ? s : [...s, id]));
 
   const items = data?.items ?? [];
-  const filtered = Boolean(status || q || body || dvMax || c3Max);
+  const filtered = Boolean(status || q || body || dvMin || dvMax || c3Min || c3Max || owner);
 
   return (
     <div className="space-y-4">
@@ -102,15 +110,17 @@ export function ToursTable({ initial, canCreate }: ToursTableProps) {
           </select>
         </label>
         <label className="flex flex-col gap-1 text-xs text-muted">
-          Total Δv at most (km/s)
-          <input value={dvMax} onChange={(e) => setDvMax(e.target.value)} inputMode="decimal" placeholder="any" aria-label="Maximum total Δv"
-            className="num h-9 w-28 rounded-md border border-line bg-sunken px-3 text-sm text-ink outline-none focus:border-accent" />
+          Owner
+          <select value={owner} onChange={(e) => setOwner(e.target.value)} aria-label="Filter by owner"
+            className="h-9 rounded-md border border-line bg-sunken px-2 text-sm text-ink">
+            <option value="">Anyone</option>
+            {(members?.items ?? []).map((m) => (
+              <option key={m.id} value={String(m.id)}>{m.name}</option>
+            ))}
+          </select>
         </label>
-        <label className="flex flex-col gap-1 text-xs text-muted">
-          Launch C3 at most (km²/s²)
-          <input value={c3Max} onChange={(e) => setC3Max(e.target.value)} inputMode="decimal" placeholder="any" aria-label="Maximum launch C3"
-            className="num h-9 w-28 rounded-md border border-line bg-sunken px-3 text-sm text-ink outline-none focus:border-accent" />
-        </label>
+        <RangeFilter label="Total Δv (km/s)" name="total Δv" min={dvMin} max={dvMax} onMin={setDvMin} onMax={setDvMax} />
+        <RangeFilter label="Launch C3 (km²/s²)" name="launch C3" min={c3Min} max={c3Max} onMin={setC3Min} onMax={setC3Max} />
         <div className="ml-auto flex items-center gap-2">
           {isLoading ? <Spinner label="Loading tours" /> : null}
           <span className="text-xs text-muted">{data ? `${data.total} tour${data.total === 1 ? "" : "s"}` : ""}</span>
@@ -189,5 +199,19 @@ export function ToursTable({ initial, canCreate }: ToursTableProps) {
         </div>
       )}
     </div>
+  );
+}
+
+function RangeFilter(props: { label: string; name: string; min: string; max: string; onMin(v: string): void; onMax(v: string): void }) {
+  const cls = "num h-9 w-20 rounded-md border border-line bg-sunken px-2 text-sm text-ink outline-none focus:border-accent";
+  return (
+    <fieldset className="flex flex-col gap-1 text-xs text-muted">
+      <legend className="mb-1">{props.label}</legend>
+      <span className="flex items-center gap-1">
+        <input value={props.min} onChange={(e) => props.onMin(e.target.value)} inputMode="decimal" placeholder="min" aria-label={`Minimum ${props.name}`} className={cls} />
+        <span aria-hidden>–</span>
+        <input value={props.max} onChange={(e) => props.onMax(e.target.value)} inputMode="decimal" placeholder="max" aria-label={`Maximum ${props.name}`} className={cls} />
+      </span>
+    </fieldset>
   );
 }

@@ -98,8 +98,12 @@ export async function listTours(user: CurrentUser, q: v.InferOutput<typeof tourL
   if (q.owner) where.ownerId = Number(q.owner);
   if (q.q) where.name = { [Op.like]: `%${q.q.replace(/[%_]/g, (m) => "\\" + m)}%` };
   if (q.body) where.chain = { [Op.like]: `%${q.body.toLowerCase().replace(/[%_]/g, "")}%` };
-  if (q.dvMax) where.totalDvKmS = { [Op.lte]: Number(q.dvMax) };
-  if (q.c3Max) where.c3Km2S2 = { [Op.lte]: Number(q.c3Max) };
+  const range = (lo?: string, hi?: string) => ({
+    ...(lo ? { [Op.gte]: Number(lo) } : {}),
+    ...(hi ? { [Op.lte]: Number(hi) } : {}),
+  });
+  if (q.dvMin || q.dvMax) where.totalDvKmS = range(q.dvMin, q.dvMax);
+  if (q.c3Min || q.c3Max) where.c3Km2S2 = range(q.c3Min, q.c3Max);
   const dir = q.dir === "asc" ? "ASC" : "DESC";
   const order: Order =
     q.sort === "owner"

@@ -126,6 +126,21 @@ describe("tours", () => {
     expect(bad.body.issues[0].path).toBe("sort");
   });
 
+  it("filters by owner and by Δv and C3 ranges", async () => {
+    await as("viewer@alder.example", PW);
+    const all = (await call(toursRoute.GET(req("GET", "/api/tours"), {}))).body.items as { ownerId: number; totalDvKmS: number; c3Km2S2: number }[];
+    const owner = all[0]!.ownerId;
+    const byOwner = await call(toursRoute.GET(req("GET", `/api/tours?owner=${owner}`), {}));
+    expect(byOwner.body.items.length).toBeGreaterThan(0);
+    expect(byOwner.body.items.every((t: { ownerId: number }) => t.ownerId === owner)).toBe(true);
+    const ranged = await call(toursRoute.GET(req("GET", "/api/tours?dvMin=0.5&dvMax=2&c3Min=9&c3Max=12"), {}));
+    const expected = all.filter((t) => t.totalDvKmS >= 0.5 && t.totalDvKmS <= 2 && t.c3Km2S2 >= 9 && t.c3Km2S2 <= 12);
+    expect(ranged.body.total).toBe(expected.length);
+    expect(ranged.body.total).toBeGreaterThan(0);
+    const bad = await call(toursRoute.GET(req("GET", "/api/tours?dvMin=fast"), {}));
+    expect(bad.status).toBe(400);
+  });
+
   it("a viewer cannot create a tour (403)", async () => {
     await as("viewer@alder.example", PW);
     const r = await call(toursRoute.POST(req("POST", "/api/tours", { name: "Nope" }), {}));
