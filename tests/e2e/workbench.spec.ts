@@ -25,6 +25,31 @@ function plusDays(text: string, d: number): string {
   return new Date(t).toISOString().slice(0, 16).replace("T", " ");
 }
 
+/** A digest of the Orrery's WebGL canvas: distinct colours on a grid, and a checksum of those pixels. */
+async function canvasDigest(page: Page): Promise<{ colours: number; sum: number }> {
+  return page.evaluate(() => {
+    const canvas = document.querySelector('[data-testid="orrery"] canvas') as HTMLCanvasElement | null;
+    if (!canvas || canvas.width === 0) return { colours: 0, sum: 0 };
+    const c2 = document.createElement("canvas");
+    c2.width = canvas.width;
+    c2.height = canvas.height;
+    const ctx = c2.getContext("2d")!;
+    ctx.drawImage(canvas, 0, 0); // the Canvas keeps its drawing buffer (preserveDrawingBuffer)
+    const { data } = ctx.getImageData(0, 0, c2.width, c2.height);
+    const seen = new Set<number>();
+    let sum = 0;
+    for (let y = 0; y < c2.height; y += 3) {
+      for (let x = 0; x < c2.width; x += 3) {
+        const i = (y * c2.width + x) * 4;
+        const v = (data[i]! << 16) | (data[i + 1]! << 8) | data[i + 2]!;
+        seen.add(v);
+        sum = (sum + v * (x + 1) * (y + 1)) % 2147483647;
+      }
+    }
+    return { colours: seen.size, sum };
+  });
+}
+
 const venusEpoch = (page: Page) => page.locator('[data-node-id="venus"]').getByTestId("epoch-input");
 
 test.describe("Workbench", () => {
@@ -34,13 +59,18 @@ test.describe("Workbench", () => {
     await expect(page.getByTestId("chain-node")).toHaveCount(5);
     await expect(page.getByTestId("orrery")).toBeVisible();
 
-    // The replay clock moves the current date.
+    // The scene draws (not one flat colour).
+    await expect.poll(async () => (await canvasDigest(page)).colours, { timeout: 15_000 }).toBeGreaterThan(3);
+    const scene0 = await canvasDigest(page);
+
+    // The replay clock moves the current date, and the spacecraft (and planets) move in the scene.
     const date0 = await page.getByTestId("timeline-date").textContent();
     await page.getByTestId("timeline-speed").selectOption("100");
     await page.getByTestId("timeline-play").click();
     await expect(page.getByTestId("timeline-date")).not.toHaveText(date0 ?? "", { timeout: 10_000 });
     await page.getByTestId("timeline-play").click(); // pause
     await expect(page.getByTestId("timeline-progress")).toContainText(/Leg \d of 4|Arrived/);
+    await expect.poll(async () => (await canvasDigest(page)).sum, { timeout: 10_000 }).not.toBe(scene0.sum);
     await shot(page, "workbench-designer");
 
     // Edit the Venus flyby epoch: the Δv budget is recomputed in the worker.

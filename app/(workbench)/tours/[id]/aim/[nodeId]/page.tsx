@@ -1,9 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
-import { requireUser } from "@/lib/auth/dal";
 import { can } from "@/lib/auth/roles";
-import { getTourDetail } from "@/lib/db/queries/tours";
-import { HttpError } from "@/lib/server/http";
+import { loadPageTour } from "@/lib/tours/load-page-tour";
 import { bodyLabel } from "@/lib/format";
 import { AimBoard } from "@/components/aim/aim-board";
 
@@ -12,15 +10,7 @@ export const dynamic = "force-dynamic";
 type Props = { params: Promise<{ id: string; nodeId: string }> };
 
 async function load(idRaw: string, nodeId: string) {
-  const user = await requireUser();
-  if (!/^[1-9]\d{0,9}$/.test(idRaw)) notFound();
-  let tour;
-  try {
-    tour = await getTourDetail(user, Number(idRaw));
-  } catch (err) {
-    if (err instanceof HttpError && err.status === 404) notFound();
-    throw err;
-  }
+  const { user, tour } = await loadPageTour(idRaw);
   const index = tour.tour.nodes.findIndex((n) => n.id === nodeId);
   // Only intermediate nodes are flybys (the first is the launch, the last the arrival).
   if (index < 1 || index > tour.tour.nodes.length - 2) notFound();
