@@ -11,6 +11,7 @@ import type { CurrentUser } from "@/lib/auth/dal";
 import { can } from "@/lib/auth/roles";
 import { HttpError, forbidden, notFound } from "@/lib/server/http";
 import { audit } from "@/lib/db/audit";
+import { refreshSummariesForBody } from "./tours";
 import { bodyInputOf, bodyRecordOf, type BodyInput } from "@/lib/validation/body";
 import { parseBodiesCsv, summarizeErrors, type CsvRowError } from "@/lib/files/bodies-csv";
 import { AU_KM } from "@/lib/astro/constants";
@@ -112,7 +113,7 @@ export async function createBody(user: CurrentUser, input: BodyInput): Promise<C
 
 /**
  * Edit a body's name and elements. Its id (`custom:<slug>`) never changes, so tours that use it
- * keep working; their stored summaries are refreshed when they are next saved.
+ * keep working; their stored summary columns are re-evaluated against the new elements at once.
  */
 export async function updateBody(user: CurrentUser, id: number, input: BodyInput): Promise<CatalogBody> {
   const b = await findTeamBody(user, id);
@@ -122,6 +123,7 @@ export async function updateBody(user: CurrentUser, id: number, input: BodyInput
     await b.update(rec, { transaction });
     await audit({ teamId: user.teamId, actorId: user.id, action: "body.update", target: `body:${b.id}`, detail: { bodyId: `custom:${b.slug}`, name: rec.name } }, transaction);
   });
+  await refreshSummariesForBody(user.teamId, `custom:${b.slug}`);
   return getCatalogBody(user, b.id);
 }
 

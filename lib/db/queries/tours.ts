@@ -237,3 +237,26 @@ export async function deleteTour(user: CurrentUser, id: number): Promise<void> {
     await audit({ teamId: user.teamId, actorId: user.id, action: "tour.delete", target: `tour:${id}`, detail: { name: t.name } }, transaction);
   });
 }
+
+/**
+ * Re-evaluate the team's tours that pass through `bodyId` (after its elements changed) and store
+ * the server's new summary columns. The tour JSON and its version do not change: the summary is
+ * derived data, and it must agree with the catalog the tour is evaluated against.
+ */
+export async function refreshSummariesForBody(teamId: number, bodyId: string): Promise<number> {
+  const bodies = await teamBodies(teamId);
+  const rows = await Tour.findAll({ where: { teamId, chain: { [Op.like]: `%${bodyId}%` } } });
+  let n = 0;
+  for (const t of rows) {
+    if (!t.chain.split(",").includes(bodyId)) continue;
+    const tour = parseStored(t.specJson);
+    try {
+      const { summary } = evaluateStoredTour(tour, bodies);
+      await Tour.update(summary, { where: { id: t.id }, silent: true });
+      n++;
+    } catch (err) {
+      console.error("[gybe] could not refresh the summary of tour", t.id, err);
+    }
+  }
+  return n;
+}

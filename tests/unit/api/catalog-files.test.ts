@@ -189,6 +189,24 @@ describe("PATCH and DELETE /api/bodies/[id]", () => {
     expect(bad.status).toBe(400);
   });
 
+  it("editing a body re-evaluates the stored summary of the tours that pass through it", async () => {
+    await as("designer@alder.example", PW);
+    const skua = await Tour.findOne({ where: { teamId: alderTeamId, name: "Skua — Aldra flyby via Mars" } });
+    const before = skua!.arrivalVinfKmS;
+    const cur = await call(bodyRoute.GET(req("GET", `/api/bodies/${aldraId}`), ctx({ id: String(aldraId) })));
+    expect(cur.status).toBe(200);
+    const moved = { ...cur.body.input, raanDeg: (cur.body.input.raanDeg + 5) % 360 };
+    const r = await call(bodyRoute.PATCH(req("PATCH", `/api/bodies/${aldraId}`, moved), ctx({ id: String(aldraId) })));
+    expect(r.status).toBe(200);
+    const after = await Tour.findByPk(skua!.id);
+    expect(after!.arrivalVinfKmS).not.toBeCloseTo(before!, 6);
+    const fresh = evaluateStoredTour(parseStored(after!.specJson), await teamBodies(alderTeamId));
+    expect(after!.arrivalVinfKmS).toBeCloseTo(fresh.summary.arrivalVinfKmS!, 9);
+    expect(after!.version).toBe(skua!.version);
+    // Put Aldra back for the tests that follow.
+    expect((await call(bodyRoute.PATCH(req("PATCH", `/api/bodies/${aldraId}`, cur.body.input), ctx({ id: String(aldraId) })))).status).toBe(200);
+  });
+
   it("refuses to delete a body a tour uses, with 409 naming the tour", async () => {
     await as("lead@alder.example", PW);
     const r = await call(bodyRoute.DELETE(req("DELETE", `/api/bodies/${aldraId}`), ctx({ id: String(aldraId) })));
