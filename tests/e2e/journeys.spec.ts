@@ -51,6 +51,12 @@ test("designer saves and submits two tours; the lead compares, returns one and b
   await expect(lead.getByText("Journey A — Mars, early launch").first()).toBeVisible();
   await expect(lead.getByText("Journey B — Mars, baseline candidate").first()).toBeVisible();
   await expect(lead.getByTestId("caution-banner").first()).toBeVisible();
+  // Both tours in one Orrery on one replay clock.
+  await expect(lead.getByTestId("orrery").locator("canvas")).toBeVisible();
+  const d0 = await lead.getByTestId("compare-date").textContent();
+  await lead.getByTestId("compare-play").click();
+  await expect(lead.getByTestId("compare-date")).not.toHaveText(d0 ?? "", { timeout: 10_000 });
+  await lead.getByTestId("compare-play").click();
   await shot(lead, "journey-compare");
 
   await lead.goto(`/tours/${a}`);

@@ -11,6 +11,7 @@ import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { MetricsTable } from "@/components/compare/metrics-table";
 import { DvBars } from "@/components/compare/dv-bars";
 import { Timelines } from "@/components/compare/timelines";
+import { CompareOrrery, type CompareOrreryProps } from "@/components/compare/compare-orrery";
 
 export const metadata: Metadata = { title: "Compare" };
 export const dynamic = "force-dynamic";
@@ -50,10 +51,13 @@ export default async function ComparePage({ searchParams }: { searchParams: Prom
   }
 
   const items: CompareItem[] = [];
+  const scene: CompareOrreryProps["tours"] = [];
   const missing: number[] = [];
   for (const id of ids) {
     try {
-      items.push(compareItemOf(await getTourDetail(user, id)));
+      const d = await getTourDetail(user, id);
+      items.push(compareItemOf(d));
+      scene.push({ id: d.id, name: d.name, tour: d.tour, customBodies: d.customBodies });
     } catch (err) {
       if (err instanceof HttpError && err.status === 404) missing.push(id);
       else throw err;
@@ -81,6 +85,10 @@ export default async function ComparePage({ searchParams }: { searchParams: Prom
           <CardBody><Timelines items={items} /></CardBody>
         </Card>
       </div>
+      <Card aria-labelledby="orrery-title">
+        <CardHeader title={<span id="orrery-title">Orrery</span>} description="All selected tours in one scene, replayed on one clock." />
+        <CardBody><CompareOrrery tours={scene} /></CardBody>
+      </Card>
     </div>
   );
 }
