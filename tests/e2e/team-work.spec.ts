@@ -64,7 +64,7 @@ test.describe("team work", () => {
     // The new password signs in from a fresh browser.
     const fresh = await (await browser.newContext()).newPage();
     await signIn(fresh, "quinn@alder.example", "quinn-password-42");
-    await expect(fresh.getByText("Quinn Tamsin", { exact: true })).toBeVisible();
+    await expect(fresh.getByTestId("user-menu").getByText("Quinn Tamsin", { exact: true })).toBeVisible();
 
     await page.goto("/team");
     await expect(page.getByTestId("member-row").filter({ hasText: "quinn@alder.example" })).toBeVisible();
