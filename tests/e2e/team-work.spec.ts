@@ -54,7 +54,7 @@ test.describe("team work", () => {
     await shot(invitee, "invite-form");
     await invitee.getByRole("button", { name: "Join team" }).click();
     await expect(invitee).toHaveURL(/\/tours/);
-    await expect(invitee.getByText("Quinn Tamsin", { exact: true })).toBeVisible();
+    await expect(invitee.getByTestId("user-menu").getByText("Quinn Tamsin", { exact: true })).toBeVisible();
 
     // The link works once.
     await invitee.goto(path!);
