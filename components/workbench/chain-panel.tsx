@@ -20,6 +20,7 @@ import {
   setLeg,
   setNodeBody,
   setNodeEpoch,
+  setNodeWindow,
   setRpMin,
 } from "@/lib/client/workbench-edits";
 import { useWorkbench } from "@/lib/client/workbench-store";
@@ -144,6 +145,13 @@ export function ChainPanel({ tourId, canEditChain, canEditAim, bodyOptions, resu
                     <span className="num text-ink">{dateTimeOf(node.epoch)}</span> UTC
                   </p>
                 )}
+                <NodeWindow
+                  nodeId={node.id}
+                  epoch={node.epoch}
+                  window={node.window ?? null}
+                  editable={canEditChain}
+                  onChange={(w, key) => edit((t) => setNodeWindow(t, node.id, w), key)}
+                />
 
                 {isFlyby ? (
                   <div className="mt-2 flex flex-wrap items-end gap-2">
@@ -318,6 +326,61 @@ function ArrivalEditor({
           <NumberInput label="Capture e" value={arrival.e} min={0} maxExclusive={1} onCommit={(v) => v !== null && onChange({ ...arrival, e: v }, "capture:e")} />
         </>
       ) : null}
+    </div>
+  );
+}
+
+const WINDOW_HALF_DAYS = 30;
+
+/**
+ * A node's search window (TDB s): the date range Tour search explores for this node. Editors set,
+ * change or clear it; readers see it as text.
+ */
+function NodeWindow(props: {
+  nodeId: string;
+  epoch: number;
+  window: { start: number; end: number } | null;
+  editable: boolean;
+  onChange(w: { start: number; end: number } | null, key?: string): void;
+}) {
+  const { window: w, editable, epoch, nodeId } = props;
+  if (!editable) {
+    return w ? (
+      <p className="mt-1 text-xs text-muted" data-testid="window-text">
+        Search window <span className="num text-ink">{dateTimeOf(w.start).slice(0, 10)}</span> –{" "}
+        <span className="num text-ink">{dateTimeOf(w.end).slice(0, 10)}</span>
+      </p>
+    ) : null;
+  }
+  if (!w) {
+    return (
+      <button
+        type="button"
+        className="mt-1.5 text-xs text-muted underline-offset-2 hover:text-ink hover:underline"
+        data-testid="window-add"
+        onClick={() => props.onChange({ start: epoch - WINDOW_HALF_DAYS * 86400, end: epoch + WINDOW_HALF_DAYS * 86400 })}
+      >
+        + Search window (±{WINDOW_HALF_DAYS} d)
+      </button>
+    );
+  }
+  return (
+    <div className="mt-2 grid grid-cols-[minmax(0,1fr)_minmax(0,1fr)_auto] items-end gap-2" data-testid="window-fields">
+      <EpochInput
+        label="Window from"
+        value={w.start}
+        data-testid="window-start"
+        onCommit={(t) => props.onChange({ start: t, end: Math.max(t, w.end) }, `wstart:${nodeId}`)}
+      />
+      <EpochInput
+        label="Window to"
+        value={w.end}
+        data-testid="window-end"
+        onCommit={(t) => props.onChange({ start: Math.min(t, w.start), end: t }, `wend:${nodeId}`)}
+      />
+      <IconButton label="Clear the search window" onClick={() => props.onChange(null)} className="mb-1">
+        <Glyph d={GLYPHS.remove} size={12} />
+      </IconButton>
     </div>
   );
 }

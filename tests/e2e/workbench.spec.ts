@@ -131,6 +131,24 @@ test.describe("Workbench", () => {
     await expect(page.getByRole("button", { name: /^Undo/ })).toBeDisabled();
   });
 
+  test("designer: a node's search window is edited in the Chain and undone", async ({ page }) => {
+    await signIn(page, "designer@alder.example");
+    await openKestrel(page);
+    const venus = page.locator('[data-node-id="venus"]');
+    await expect(venus.getByTestId("window-fields")).toBeVisible();
+    const from0 = await venus.getByTestId("window-start").inputValue();
+    await venus.getByTestId("window-start").fill(plusDays(from0, -10));
+    await venus.getByTestId("window-start").press("Enter");
+    await expect(page.getByTestId("unsaved")).toBeVisible();
+    await expect(venus.getByTestId("window-start")).toHaveValue(plusDays(from0, -10));
+    await venus.getByRole("button", { name: "Clear the search window" }).click();
+    await expect(venus.getByTestId("window-fields")).toHaveCount(0);
+    await expect(venus.getByTestId("window-add")).toBeVisible();
+    for (let k = 0; k < 2; k++) await page.getByRole("button", { name: /^Undo/ }).click();
+    await expect(venus.getByTestId("window-start")).toHaveValue(from0);
+    await expect(page.getByTestId("unsaved")).toHaveCount(0);
+  });
+
   test("designer: a stale save shows what changed and can load their version", async ({ page }) => {
     await signIn(page, "designer@alder.example");
     const id = await openKestrel(page);
