@@ -32,7 +32,8 @@ function memberOf(u: User): MemberItem {
 
 /** Change role and/or active of a member of the caller's team. The last active lead stays a lead. */
 export async function updateMember(lead: CurrentUser, userId: number, patch: { role?: Role; active?: boolean }): Promise<MemberItem> {
-  return sequelize.transaction(async (transaction) => {
+  let roleChange: { email: string; name: string; from: Role; to: Role } | null = null;
+  const member = await sequelize.transaction(async (transaction) => {
     const u = await User.findOne({ where: { id: userId, teamId: lead.teamId }, transaction });
     if (!u) throw notFound("Member");
     const nextRole = patch.role ?? u.role;
@@ -63,8 +64,20 @@ export async function updateMember(lead: CurrentUser, userId: number, patch: { r
       },
       transaction,
     );
+    if (nextRole !== before.role && nextActive && u.id !== lead.id) roleChange = { email: u.email, name: u.name, from: before.role, to: nextRole };
     return memberOf(u);
   });
+  // Tell the member, after the commit (a mail failure must not undo the change).
+  const rc = roleChange as { email: string; name: string; from: Role; to: Role } | null;
+  if (rc) {
+    await sendMail({
+      teamId: lead.teamId,
+      to: rc.email,
+      subject: `Your role on ${lead.teamName} is now ${rc.to}`,
+      text: `Hello ${rc.name},\n\n${lead.name} changed your role on ${lead.teamName} in Gybe from ${rc.from} to ${rc.to}.\nOpen Gybe: ${appUrl()}/tours\n`,
+    });
+  }
+  return member;
 }
 
 export type InvitationState = "pending" | "accepted" | "expired";

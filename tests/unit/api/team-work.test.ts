@@ -384,6 +384,9 @@ describe("team members", () => {
     expect((await patch(await uid(VIEWER), { active: true })).body.active).toBe(true);
     expect(await AuditEvent.count({ where: { action: "member.deactivate", target: `user:${await uid(VIEWER)}` } })).toBe(1);
     expect(await AuditEvent.count({ where: { action: "member.role", target: `user:${lockout}` } })).toBe(1);
+    // The member is told of the new role by e-mail (deactivation and reactivation send nothing).
+    const told = await MailMessage.findAll({ where: { to: "lockout@alder.example" } });
+    expect(told.map((m) => m.subject)).toEqual(["Your role on Alder Flight Studio is now analyst"]);
   });
 
   it("the last active lead cannot demote or deactivate themselves (409); with a second lead they can", async () => {
