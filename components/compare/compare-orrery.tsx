@@ -6,7 +6,7 @@
  */
 import { useEffect, useMemo, useState } from "react";
 import { Orrery, type OrreryProps } from "@/components/scene/orrery";
-import { useTimeline } from "@/lib/client/timeline-store";
+import { usePlaybackLoop, useTimeline } from "@/lib/client/timeline-store";
 import { evaluateTour } from "@/lib/astro/tour";
 import { sampleTour } from "@/lib/astro/sample";
 import { ephemerisFromSpec } from "@/lib/astro/ephemeris";
@@ -77,19 +77,7 @@ function ReplayBar() {
   const playing = useTimeline((s) => s.playing);
   const speed = useTimeline((s) => s.speedDaysPerSecond);
   const { play, pause, setTime, setSpeed } = useTimeline.getState();
-  useEffect(() => {
-    if (!playing) return;
-    let raf = 0;
-    let last = performance.now();
-    const step = (now: number) => {
-      const dt = Math.min(0.25, Math.max(0, (now - last) / 1000));
-      last = now;
-      useTimeline.getState().tick(dt);
-      if (useTimeline.getState().playing) raf = requestAnimationFrame(step);
-    };
-    raf = requestAnimationFrame(step);
-    return () => cancelAnimationFrame(raf);
-  }, [playing]);
+  usePlaybackLoop();
   const span = end - start;
   return (
     <div className="flex flex-wrap items-center gap-3 text-sm" aria-label="Replay">

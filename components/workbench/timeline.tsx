@@ -5,8 +5,7 @@
  * the shared replay clock (`useTimeline`) with a requestAnimationFrame loop while playing.
  * Replaying changes nothing in the tour, so every role may use it.
  */
-import { useEffect } from "react";
-import { useTimeline } from "@/lib/client/timeline-store";
+import { usePlaybackLoop, useTimeline } from "@/lib/client/timeline-store";
 import { cn } from "@/components/ui/cn";
 import { bodyLabel, dateTimeOf } from "@/lib/format";
 import { progressAt, progressText } from "@/lib/client/workbench-derive";
@@ -19,25 +18,6 @@ export interface TimelineStripProps {
   selectedNodeId: string | null;
   onJumpToNode?(nodeId: string): void;
   className?: string;
-}
-
-/** Runs the replay clock while `playing` (one tick per animation frame, wall-clock scaled). */
-function usePlaybackLoop() {
-  const playing = useTimeline((s) => s.playing);
-  useEffect(() => {
-    if (!playing) return;
-    let raf = 0;
-    let last = performance.now();
-    const step = (now: number) => {
-      // Clamp long gaps (background tab) so the replay does not leap ahead.
-      const dt = Math.min(0.25, Math.max(0, (now - last) / 1000));
-      last = now;
-      useTimeline.getState().tick(dt);
-      if (useTimeline.getState().playing) raf = requestAnimationFrame(step);
-    };
-    raf = requestAnimationFrame(step);
-    return () => cancelAnimationFrame(raf);
-  }, [playing]);
 }
 
 export function TimelineStrip({ nodes, selectedNodeId, onJumpToNode, className }: TimelineStripProps) {

@@ -5,6 +5,7 @@
  * `useTimeline.getState()` (no React re-render per frame); widgets that show the date
  * subscribe with a selector.
  */
+import { useEffect } from "react";
 import { create } from "zustand";
 
 export interface TimelineState {
@@ -44,3 +45,22 @@ export const useTimeline = create<TimelineState>((set, get) => ({
     else set({ time: next });
   },
 }));
+
+/** Runs the replay clock while it plays: one tick per animation frame, wall-clock scaled. */
+export function usePlaybackLoop(): void {
+  const playing = useTimeline((s) => s.playing);
+  useEffect(() => {
+    if (!playing) return;
+    let raf = 0;
+    let last = performance.now();
+    const step = (now: number) => {
+      // Clamp long gaps (background tab) so the replay does not leap ahead.
+      const dt = Math.min(0.25, Math.max(0, (now - last) / 1000));
+      last = now;
+      useTimeline.getState().tick(dt);
+      if (useTimeline.getState().playing) raf = requestAnimationFrame(step);
+    };
+    raf = requestAnimationFrame(step);
+    return () => cancelAnimationFrame(raf);
+  }, [playing]);
+}
