@@ -22,6 +22,7 @@ import { cachedEphemeris, meanElementsEphemeris, vsopEphemeris } from "../../lib
 import { isoToTdbSeconds, mjd2000ToTdbSeconds } from "../../lib/astro/time";
 import type { Ephemeris, SearchBounds, TourSpec } from "../../lib/astro/types";
 import type { BenchRow } from "./types";
+import { CASSINI1_BOUNDS, CASSINI1_X, cassini1Spec } from "../../tests/fixtures/cassini1";
 
 const DAY = 86400;
 
@@ -31,22 +32,10 @@ export const CASSINI1_BEST = {
   vsop: 5.23068, // V–V 449.4 d (≈ 2 Venus years): x ≈ [−781.49, 144.26, 449.40, 58.63, 970.03, 4473.26] d
 } as const;
 
-const spec: TourSpec = {
-  nodes: (["earth", "venus", "venus", "earth", "jupiter", "saturn"] as const).map((body) => ({ body, epoch: 0 })),
-  arrival: { kind: "capture", rp: 108950, e: 0.98 },
-  rpMin: { venus: 6351.8, earth: 6778.1, jupiter: 600000 },
-};
-const bounds: SearchBounds = {
-  launch: [mjd2000ToTdbSeconds(-1000), mjd2000ToTdbSeconds(0)],
-  tof: [
-    [30, 400],
-    [100, 470],
-    [30, 400],
-    [400, 2000],
-    [1000, 6000],
-  ].map(([a, b]) => [a! * DAY, b! * DAY] as [number, number]),
-};
-const PUBLISHED_X = [-789.8117, 158.302027105278, 449.385873819743, 54.7489684339665, 1024.36205846918, 4552.30796805542];
+// Cassini1 (GTOP, Vinkó & Izzo 2008): the search replaces the epochs of the spec.
+const spec: TourSpec = cassini1Spec();
+const bounds: SearchBounds = CASSINI1_BOUNDS;
+const PUBLISHED_X = CASSINI1_X;
 
 function median(xs: number[]): number {
   const s = [...xs].sort((a, b) => a - b);

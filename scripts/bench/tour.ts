@@ -9,14 +9,12 @@
  */
 import { evaluateTour, tourObjective } from "../../lib/astro/tour";
 import { cachedEphemeris, meanElementsEphemeris, vsopEphemeris } from "../../lib/astro/ephemeris";
-import { mjd2000ToTdbSeconds } from "../../lib/astro/time";
-import type { BodyId, Ephemeris, TourSpec } from "../../lib/astro/types";
+import type { Ephemeris, TourSpec } from "../../lib/astro/types";
 import type { BenchRow } from "./types";
+import { CASSINI1_X, cassini1Spec } from "../../tests/fixtures/cassini1";
 
-const DAY_S = 86400;
-/** GTOP Cassini1 published best decision vector [t0 MJD2000, T1…T5 days] (from memory, CHECKS.md). */
-const CASSINI1_X = [-789.8117, 158.302027105278, 449.385873819743, 54.7489684339665, 1024.36205846918, 4552.30796805542];
-const SEQ: BodyId[] = ["earth", "venus", "venus", "earth", "jupiter", "saturn"];
+export { cassini1Spec };
+
 
 function mulberry32(seed: number): () => number {
   let a = seed >>> 0;
@@ -29,18 +27,6 @@ function mulberry32(seed: number): () => number {
   };
 }
 
-/** Cassini1 TourSpec for decision vector x (epochs via mjd2000ToTdbSeconds, legs in days). */
-export function cassini1Spec(x: readonly number[] = CASSINI1_X): TourSpec {
-  let t = mjd2000ToTdbSeconds(x[0]!);
-  return {
-    nodes: SEQ.map((body, k) => {
-      if (k > 0) t += x[k]! * DAY_S;
-      return { body, epoch: t };
-    }),
-    arrival: { kind: "capture", rp: 108950, e: 0.98 },
-    rpMin: { venus: 6351.8, earth: 6778.1, jupiter: 600000 },
-  };
-}
 
 function objectiveAt(eph: Ephemeris): { value: number; launchVinf: number; arrivalVinf: number } {
   const spec = cassini1Spec();

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { CASSINI1_BOUNDS, cassini1Spec as cassini1SpecAt } from "../../fixtures/cassini1";
 import {
   porkchop,
   optimizeTour,
@@ -29,21 +30,8 @@ function argminFinite(a: Float64Array): number {
 }
 
 // ---- the published multiple-flyby benchmark "Cassini1" (GTOP database, Vinkó & Izzo 2008; CHECKS.md)
-const cassini1Spec: TourSpec = {
-  nodes: (["earth", "venus", "venus", "earth", "jupiter", "saturn"] as const).map((body) => ({ body, epoch: 0 })),
-  arrival: { kind: "capture", rp: 108950, e: 0.98 },
-  rpMin: { venus: 6351.8, earth: 6778.1, jupiter: 600000 },
-};
-const cassini1Bounds: SearchBounds = {
-  launch: [mjd2000ToTdbSeconds(-1000), mjd2000ToTdbSeconds(0)],
-  tof: [
-    [30, 400],
-    [100, 470],
-    [30, 400],
-    [400, 2000],
-    [1000, 6000],
-  ].map(([a, b]) => [a! * DAY_S, b! * DAY_S] as [number, number]),
-};
+const cassini1Spec: TourSpec = cassini1SpecAt(); // the search replaces its epochs
+const cassini1Bounds: SearchBounds = CASSINI1_BOUNDS;
 
 describe("porkchop", () => {
   it("Earth→Mars 2026 and 2028 opportunities: minimum C3 in 8–16 km²/s², about 780 days apart (common practice)", () => {

@@ -1,10 +1,10 @@
 import { describe, expect, it } from "vitest";
+import { cassini1Spec } from "../../fixtures/cassini1";
 import { evaluateTour, tourObjective, rpMinFor } from "@/lib/astro/tour";
 import { bPlaneFromVinf } from "@/lib/astro/bplane";
 import { poweredFlyby } from "@/lib/astro/flyby";
 import { lambert } from "@/lib/astro/lambert";
 import { vsopEphemeris, meanElementsEphemeris, cachedEphemeris } from "@/lib/astro/ephemeris";
-import { mjd2000ToTdbSeconds } from "@/lib/astro/time";
 import { BODIES, MU_SUN, DAY_S, OBLIQUITY_J2000 } from "@/lib/astro/constants";
 import type { BodyId, Ephemeris, TourSpec, Vec3 } from "@/lib/astro/types";
 
@@ -239,20 +239,6 @@ describe("evaluateTour: flybys, B-plane, violations", () => {
 // decision vector (from memory, CHECKS.md); zero-rev prograde legs; rpMin Venus 6351.8, Earth 6778.1,
 // Jupiter 600000 km; Saturn capture rp 108950 km, e 0.98. Its 4.9307 km/s holds only with the benchmark's own
 // analytic ephemeris; our ephemerides give different values (recorded below, measured on this code).
-const CASSINI1_X = [-789.8117, 158.302027105278, 449.385873819743, 54.7489684339665, 1024.36205846918, 4552.30796805542];
-function cassini1Spec(x: readonly number[] = CASSINI1_X): TourSpec {
-  const bodies: BodyId[] = ["earth", "venus", "venus", "earth", "jupiter", "saturn"];
-  let t = mjd2000ToTdbSeconds(x[0]!);
-  const nodes = bodies.map((body, k) => {
-    if (k > 0) t += x[k]! * DAY_S;
-    return { body, epoch: t };
-  });
-  return {
-    nodes,
-    arrival: { kind: "capture", rp: 108950, e: 0.98 },
-    rpMin: { venus: 6351.8, earth: 6778.1, jupiter: 600000 },
-  };
-}
 
 describe("GTOP Cassini1 at the published decision vector", () => {
   // Measured on this code (2026-12-02): launch v∞ 2.7557 km/s, Venus rp 13,266 / 46,550 km, Earth rp 6,691 km
