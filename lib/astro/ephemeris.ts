@@ -14,7 +14,7 @@
  * two-body conics about the Sun (MU_SUN) from their osculating elements at their epoch.
  */
 import { AstroTime, Body, HelioState } from "astronomy-engine";
-import { AU_KM, DAY_S, MU_SUN } from "./constants";
+import { AU_KM, DAY_S, MU_SUN, PLANET_IDS } from "./constants";
 import { COS_OBLIQUITY, SIN_OBLIQUITY } from "./frames";
 import type {
   BodyId,
@@ -36,17 +36,7 @@ const AU_PER_DAY_KM_S = AU_KM / DAY_S;
 /** Seconds per Julian century (36525 d × 86400 s). */
 const JULIAN_CENTURY_S = 36525 * DAY_S;
 
-const PLANETS: readonly PlanetId[] = [
-  "mercury",
-  "venus",
-  "earth",
-  "mars",
-  "jupiter",
-  "saturn",
-  "uranus",
-  "neptune",
-  "pluto",
-];
+const PLANETS = PLANET_IDS;
 
 function isPlanet(body: unknown): body is PlanetId {
   return typeof body === "string" && (PLANETS as readonly string[]).includes(body);

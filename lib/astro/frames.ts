@@ -10,6 +10,7 @@
  */
 import { AstroTime, Body, RotationAxis, Rotation_EQJ_ECL } from "astronomy-engine";
 import { OBLIQUITY_J2000 } from "./constants";
+import { assertVec3 } from "./vec3";
 import type { PlanetId, Vec3, Vec3Like } from "./types";
 
 /** Identifier of a reference frame used in lib/astro. */
@@ -34,20 +35,6 @@ export const COS_OBLIQUITY: number = AE_EQJ_ECL[1]?.[1] ?? Math.cos(OBLIQUITY_J2
 /** sin ε, ε = 84381.406″ (see COS_OBLIQUITY); from astronomy-engine's Rotation_EQJ_ECL. */
 export const SIN_OBLIQUITY: number = AE_EQJ_ECL[2]?.[1] ?? Math.sin(OBLIQUITY_J2000);
 
-function checkVec(name: string, v: unknown): asserts v is Vec3Like {
-  if (v == null || typeof v !== "object" || typeof (v as { length?: unknown }).length !== "number") {
-    throw new RangeError(`${name} must be a 3-vector [x, y, z] (got ${String(v)})`);
-  }
-  const a = v as ArrayLike<unknown>;
-  if (a.length < 3) throw new RangeError(`${name} must have 3 components (got ${a.length})`);
-  for (let k = 0; k < 3; k++) {
-    const c = a[k];
-    if (typeof c !== "number" || !Number.isFinite(c)) {
-      throw new RangeError(`${name}[${k}] must be a finite number (got ${String(c)})`);
-    }
-  }
-}
-
 /**
  * Rotates a vector from the J2000 mean equator (EqJ2000) to the J2000 mean ecliptic (EclJ2000).
  * Any unit (the rotation is unit-free); valid for any finite vector; time-independent.
@@ -55,7 +42,7 @@ function checkVec(name: string, v: unknown): asserts v is Vec3Like {
  * @throws RangeError if `v` is not a finite 3-vector.
  */
 export function eqj2000ToEclJ2000(v: Vec3Like): Vec3 {
-  checkVec("v", v);
+  assertVec3("v", v);
   const x = v[0] as number;
   const y = v[1] as number;
   const z = v[2] as number;
@@ -69,7 +56,7 @@ export function eqj2000ToEclJ2000(v: Vec3Like): Vec3 {
  * @throws RangeError if `v` is not a finite 3-vector.
  */
 export function eclJ2000ToEqj2000(v: Vec3Like): Vec3 {
-  checkVec("v", v);
+  assertVec3("v", v);
   const x = v[0] as number;
   const y = v[1] as number;
   const z = v[2] as number;
@@ -85,7 +72,7 @@ export function rotateFrame(v: Vec3Like, from: FrameId, to: FrameId): Vec3 {
   if (!FRAME_IDS.includes(from)) throw new RangeError(`from: unknown frame '${String(from)}'`);
   if (!FRAME_IDS.includes(to)) throw new RangeError(`to: unknown frame '${String(to)}'`);
   if (from === to) {
-    checkVec("v", v);
+    assertVec3("v", v);
     return [v[0] as number, v[1] as number, v[2] as number];
   }
   return from === "EqJ2000" ? eqj2000ToEclJ2000(v) : eclJ2000ToEqj2000(v);

@@ -5,7 +5,7 @@
  */
 import type { TourDetail } from "@/lib/db/queries/tours";
 import type { BodyId } from "@/lib/astro/types";
-import { physicalOf, toTourSpec } from "@/lib/tours/evaluate";
+import { physicalOf, toTourSpec, type TourSummary } from "@/lib/tours/evaluate";
 
 export const COMPARE_MIN = 2;
 export const COMPARE_MAX = 6;
@@ -25,7 +25,7 @@ export interface CompareFlyby {
   feasible: boolean;
 }
 
-export interface CompareItem {
+export interface CompareItem extends TourSummary {
   id: number;
   name: string;
   status: TourDetail["status"];
@@ -33,15 +33,6 @@ export interface CompareItem {
   chain: string[];
   ephemeris: string;
   updatedAt: string;
-  launchTdbS: number | null;
-  arrivalTdbS: number | null;
-  c3Km2S2: number | null;
-  launchVinfKmS: number | null;
-  totalDvKmS: number | null;
-  tofS: number | null;
-  arrivalVinfKmS: number | null;
-  minFlybyMarginKm: number | null;
-  violationCount: number;
   arrivalKind: string;
   nodes: { id: string; body: string; epoch: number; role: "launch" | "flyby" | "arrival" }[];
   flybys: CompareFlyby[];
